@@ -1,0 +1,17 @@
+// Client build: React + Tailwind, served by the Express process in production (api/app.ts).
+import { defineConfig } from 'vite';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+
+export default defineConfig({
+  root: 'app',
+  publicDir: false,
+  plugins: [react(), tailwindcss()],
+  resolve: { alias: { '@shared': new URL('./shared', import.meta.url).pathname } },
+  build: { outDir: '../dist/app', emptyOutDir: true, sourcemap: true },
+  worker: { format: 'es' },
+  server: {
+    port: 5173,
+    proxy: { '/api': 'http://127.0.0.1:4650' },
+  },
+});
