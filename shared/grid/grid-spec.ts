@@ -1,0 +1,14 @@
+/**
+ * The sampling grid shared with shared/physics (sampleStateOnGrid): the cube [−half, half]³ bohr
+ * with n points per axis, spacing h = 2·half/(n − 1), sample (i, j, k) at index i + n·(j + n·k)
+ * (x fastest) and position (−half + i·h, −half + j·h, −half + k·h).
+ */
+export interface GridSpec {
+  n: number;
+  half: number;
+}
+
+/** Distance between neighbouring samples along an axis, bohr. */
+export function gridSpacing(grid: GridSpec): number {
+  return (2 * grid.half) / (grid.n - 1);
+}
