@@ -1,0 +1,105 @@
+// Figures and their immutable revisions.
+import type { Knex } from 'knex';
+import type { Figure, FigureSummary, Revision, RevisionSummary } from '../../shared/api/schemas';
+import { migrateFigureSpec } from '../../shared/spec/migrate-figure-spec';
+
+export interface FigureRow {
+  id: string;
+  project_id: string;
+  number: string;
+  position: number;
+  title: string;
+  caption: string;
+  alt_text: string;
+  status: Figure['status'];
+  current_revision: number;
+  approved_revision: number | null;
+  updated_at: Date;
+}
+
+interface JoinedRow extends FigureRow {
+  spec: unknown;
+  author_name: string;
+}
+
+function withCurrentRevision(db: Knex) {
+  return db('figures as f')
+    .join('figure_revisions as r', function () {
+      this.on('r.figure_id', 'f.id').andOn('r.revision', 'f.current_revision');
+    })
+    .join('users as u', 'u.id', 'r.author_id')
+    .whereNull('f.deleted_at')
+    .select('f.*', 'r.spec', 'u.name as author_name');
+}
+
+function toSummary(r: JoinedRow): FigureSummary {
+  const kind = (r.spec as { kind?: { type?: string } })?.kind?.type ?? 'unknown';
+  return {
+    id: Number(r.id),
+    projectId: Number(r.project_id),
+    number: r.number,
+    title: r.title,
+    caption: r.caption,
+    altText: r.alt_text,
+    status: r.status,
+    kind,
+    revision: r.current_revision,
+    approvedRevision: r.approved_revision,
+    updatedAt: r.updated_at.toISOString(),
+    updatedBy: r.author_name,
+  };
+}
+
+export async function listFigures(db: Knex, projectId: number): Promise<FigureSummary[]> {
+  const rows: JoinedRow[] = await withCurrentRevision(db)
+    .where('f.project_id', projectId)
+    .orderBy([{ column: 'f.position' }, { column: 'f.id' }]);
+  return rows.map(toSummary);
+}
+
+export async function findFigure(db: Knex, figureId: number): Promise<Figure | undefined> {
+  const row: JoinedRow | undefined = await withCurrentRevision(db).where('f.id', figureId).first();
+  return row && { ...toSummary(row), spec: migrateFigureSpec(row.spec) };
+}
+
+/** Locks the figure row for the rest of the transaction (serialises concurrent saves). */
+export function lockFigure(trx: Knex.Transaction, figureId: number): Promise<FigureRow | undefined> {
+  return trx('figures').where({ id: figureId }).whereNull('deleted_at').forUpdate().first() as Promise<
+    FigureRow | undefined
+  >;
+}
+
+export async function listRevisions(db: Knex, figureId: number): Promise<RevisionSummary[]> {
+  const rows = await db('figure_revisions as r')
+    .join('users as u', 'u.id', 'r.author_id')
+    .where('r.figure_id', figureId)
+    .orderBy('r.revision', 'desc')
+    .select('r.revision', 'r.created_at', 'r.message', 'r.spec_hash', 'u.name as author_name');
+  return rows.map((r) => ({
+    revision: r.revision,
+    authorName: r.author_name,
+    createdAt: r.created_at.toISOString(),
+    message: r.message,
+    specHash: r.spec_hash,
+  }));
+}
+
+export async function findRevision(db: Knex, figureId: number, revision: number): Promise<Revision | undefined> {
+  const r = await db('figure_revisions as r')
+    .join('users as u', 'u.id', 'r.author_id')
+    .where({ 'r.figure_id': figureId, 'r.revision': revision })
+    .first('r.*', 'u.name as author_name');
+  if (!r) return undefined;
+  return {
+    revision: r.revision,
+    authorName: r.author_name,
+    createdAt: r.created_at.toISOString(),
+    message: r.message,
+    specHash: r.spec_hash,
+    number: r.number,
+    title: r.title,
+    caption: r.caption,
+    altText: r.alt_text,
+    spec: migrateFigureSpec(r.spec),
+  };
+}

@@ -1,0 +1,73 @@
+// /api/figures/:figureId: one figure, its revisions, and saving a new revision.
+import { Router } from 'express';
+import type { Knex } from 'knex';
+import { z } from 'zod';
+import { idParam, updateFigureBody } from '../../shared/api/schemas';
+import { notFound } from '../lib/app-error';
+import { currentUser, requireUser } from '../middleware/require-user';
+import { validated } from '../middleware/validate';
+import { findFigure, findRevision, listRevisions } from '../repositories/figures';
+import { deleteFigure, duplicateFigure, updateFigure } from '../services/figures';
+import { authoriseFigure } from '../services/project-access';
+
+const figureParams = z.object({ figureId: idParam });
+const revisionParams = z.object({ figureId: idParam, revision: idParam });
+
+export function figureRoutes(db: Knex): Router {
+  const r = Router();
+  r.use(requireUser);
+
+  r.get(
+    '/:figureId',
+    validated({ params: figureParams }, async ({ params }, req, res) => {
+      await authoriseFigure(db, currentUser(req), params.figureId, 'read');
+      res.json(await findFigure(db, params.figureId));
+    }),
+  );
+
+  r.put(
+    '/:figureId',
+    validated({ params: figureParams, body: updateFigureBody }, async ({ params, body }, req, res) => {
+      const user = currentUser(req);
+      await authoriseFigure(db, user, params.figureId, 'edit');
+      res.json(await updateFigure(db, user, params.figureId, body));
+    }),
+  );
+
+  r.post(
+    '/:figureId/duplicate',
+    validated({ params: figureParams }, async ({ params }, req, res) => {
+      const user = currentUser(req);
+      await authoriseFigure(db, user, params.figureId, 'edit');
+      res.status(201).json(await duplicateFigure(db, user, params.figureId));
+    }),
+  );
+
+  r.delete(
+    '/:figureId',
+    validated({ params: figureParams }, async ({ params }, req, res) => {
+      await authoriseFigure(db, currentUser(req), params.figureId, 'edit');
+      await deleteFigure(db, params.figureId);
+      res.status(204).end();
+    }),
+  );
+
+  r.get(
+    '/:figureId/revisions',
+    validated({ params: figureParams }, async ({ params }, req, res) => {
+      await authoriseFigure(db, currentUser(req), params.figureId, 'read');
+      res.json(await listRevisions(db, params.figureId));
+    }),
+  );
+
+  r.get(
+    '/:figureId/revisions/:revision',
+    validated({ params: revisionParams }, async ({ params }, req, res) => {
+      await authoriseFigure(db, currentUser(req), params.figureId, 'read');
+      const rev = await findRevision(db, params.figureId, params.revision);
+      if (!rev) throw notFound('revision');
+      res.json(rev);
+    }),
+  );
+  return r;
+}

@@ -1,0 +1,154 @@
+// Request and response shapes of the HTTP API, shared by the Express routes and the React client.
+import { z } from 'zod';
+import { projectRoleSchema } from './roles';
+import { figureSpecSchema } from '../spec/figure-spec';
+
+const trimmed = (min: number, max: number) => z.string().trim().min(min).max(max);
+
+export const idParam = z.coerce.number().int().positive();
+
+// ── Auth ────────────────────────────────────────────────────────────────────
+export const emailSchema = z.string().trim().toLowerCase().pipe(z.email().max(254));
+export const passwordSchema = z
+  .string()
+  .min(10, 'must be at least 10 characters')
+  .max(200, 'must be at most 200 characters');
+
+export const loginBody = z.object({ email: emailSchema, password: z.string().min(1).max(200) });
+export const signupBody = z.object({
+  email: emailSchema,
+  name: trimmed(1, 120),
+  password: passwordSchema,
+});
+
+export const userSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  isAdmin: z.boolean(),
+});
+export type User = z.infer<typeof userSchema>;
+
+export const sessionSchema = z.object({
+  user: userSchema.nullable(),
+  csrfToken: z.string(),
+  signupEnabled: z.boolean(),
+});
+export type Session = z.infer<typeof sessionSchema>;
+
+export const siteSettingsSchema = z.object({ signupEnabled: z.boolean() });
+export type SiteSettings = z.infer<typeof siteSettingsSchema>;
+
+// ── Projects ────────────────────────────────────────────────────────────────
+export const projectSchema = z.object({
+  id: z.number(),
+  name: z.string(),
+  description: z.string(),
+  archived: z.boolean(),
+  role: projectRoleSchema,
+  figureCount: z.number(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Project = z.infer<typeof projectSchema>;
+
+export const projectListQuery = z.object({
+  archived: z.enum(['true', 'false']).optional().transform((v) => v === 'true'),
+});
+export const createProjectBody = z.object({
+  name: trimmed(1, 200),
+  description: z.string().trim().max(2000).default(''),
+});
+export const updateProjectBody = z
+  .object({
+    name: trimmed(1, 200).optional(),
+    description: z.string().trim().max(2000).optional(),
+    archived: z.boolean().optional(),
+  })
+  .refine((b) => Object.keys(b).length > 0, { message: 'nothing to change' });
+
+// ── Members ─────────────────────────────────────────────────────────────────
+export const memberSchema = z.object({
+  userId: z.number(),
+  email: z.string(),
+  name: z.string(),
+  role: projectRoleSchema,
+});
+export type Member = z.infer<typeof memberSchema>;
+export const addMemberBody = z.object({ email: emailSchema, role: projectRoleSchema });
+export const changeRoleBody = z.object({ role: projectRoleSchema });
+
+// ── Figures ─────────────────────────────────────────────────────────────────
+export const figureStatuses = ['draft', 'in_review', 'changes_requested', 'approved'] as const;
+export const figureStatusSchema = z.enum(figureStatuses);
+export type FigureStatus = z.infer<typeof figureStatusSchema>;
+
+/** Author's figure number such as "4.1" or "4.2a". */
+export const figureNumberSchema = z
+  .string()
+  .trim()
+  .max(20)
+  .regex(/^[0-9A-Za-z][0-9A-Za-z.\-]*$/, 'use digits, letters, dots and dashes, e.g. 4.2a');
+
+export const figureSummarySchema = z.object({
+  id: z.number(),
+  projectId: z.number(),
+  number: z.string(),
+  title: z.string(),
+  caption: z.string(),
+  altText: z.string(),
+  status: figureStatusSchema,
+  kind: z.string(),
+  revision: z.number(),
+  approvedRevision: z.number().nullable(),
+  updatedAt: z.string(),
+  updatedBy: z.string(),
+});
+export type FigureSummary = z.infer<typeof figureSummarySchema>;
+
+export const figureSchema = figureSummarySchema.extend({ spec: figureSpecSchema });
+export type Figure = z.infer<typeof figureSchema>;
+
+export const createFigureBody = z.object({
+  number: figureNumberSchema.default(''),
+  title: trimmed(1, 200),
+  caption: z.string().trim().max(4000).default(''),
+  altText: z.string().trim().max(4000).default(''),
+  spec: figureSpecSchema,
+});
+export const updateFigureBody = z.object({
+  baseRevision: z.number().int().positive(),
+  number: figureNumberSchema.optional(),
+  title: trimmed(1, 200).optional(),
+  caption: z.string().trim().max(4000).optional(),
+  altText: z.string().trim().max(4000).optional(),
+  spec: figureSpecSchema.optional(),
+  message: z.string().trim().max(500).default(''),
+});
+
+export const revisionSummarySchema = z.object({
+  revision: z.number(),
+  authorName: z.string(),
+  createdAt: z.string(),
+  message: z.string(),
+  specHash: z.string(),
+});
+export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
+export const revisionSchema = revisionSummarySchema.extend({
+  title: z.string(),
+  caption: z.string(),
+  altText: z.string(),
+  number: z.string(),
+  spec: figureSpecSchema,
+});
+export type Revision = z.infer<typeof revisionSchema>;
+
+// ── Errors ──────────────────────────────────────────────────────────────────
+export const apiErrorSchema = z.object({
+  error: z.object({
+    code: z.string(),
+    message: z.string(),
+    fields: z.record(z.string(), z.string()).optional(),
+  }),
+});
+export type ApiErrorBody = z.infer<typeof apiErrorSchema>;
