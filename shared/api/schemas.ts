@@ -88,7 +88,7 @@ export const figureNumberSchema = z
   .string()
   .trim()
   .max(20)
-  .regex(/^[0-9A-Za-z][0-9A-Za-z.\-]*$/, 'use digits, letters, dots and dashes, e.g. 4.2a');
+  .regex(/^[0-9A-Za-z][0-9A-Za-z.-]*$/, 'use digits, letters, dots and dashes, e.g. 4.2a');
 
 export const figureSummarySchema = z.object({
   id: z.number(),

@@ -1,0 +1,14 @@
+// The list of migrations, imported statically so they run the same under tsx, vitest and bundlers.
+// Add each new migration file here, in order.
+import type { Knex } from 'knex';
+import * as initial from './migrations/20261202000001_initial';
+
+const migrations: Record<string, Knex.Migration> = {
+  '20261202000001_initial': initial,
+};
+
+export const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(migrations),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => migrations[name],
+};
