@@ -143,6 +143,7 @@ export function compileState(state: OrbitalState): CompiledState {
   if (state.terms.length > MAX_STATE_TERMS) throw new OrbitalInputError('terms', `at most ${MAX_STATE_TERMS} terms, got ${state.terms.length}`);
 
   const complexBasis = new Map<string, { n: number; l: number; m: number; c: Complex }>();
+  let weightGiven = 0;
   state.terms.forEach((term, i) => {
     const f = `terms[${i}]`;
     if (typeof term !== 'object' || term === null) throw new OrbitalInputError(f, 'must be an object');
@@ -151,6 +152,7 @@ export function compileState(state: OrbitalState): CompiledState {
     const m = checkMagnetic(term.m, l, `${f}.m`);
     if (term.basis !== 'real' && term.basis !== 'complex') throw new OrbitalInputError(`${f}.basis`, 'must be "real" or "complex"');
     const w = readWeight(term, `${f}.weight`);
+    weightGiven += Math.hypot(w.re, w.im);
     if (term.basis === 'complex' || m === 0) {
       add(complexBasis, n, l, m, w.re, w.im);
       return;
@@ -175,7 +177,7 @@ export function compileState(state: OrbitalState): CompiledState {
     norm2 += a2;
     largest = Math.max(largest, Math.sqrt(a2));
   }
-  if (!(norm2 > 0)) throw new OrbitalInputError('terms', 'the total weight is zero (the terms cancel or all weights are 0)');
+  if (!(Math.sqrt(norm2) > CANCELLED * weightGiven)) throw new OrbitalInputError('terms', 'the total weight is zero (the terms cancel or all weights are 0)');
   const kept = entries.filter((e) => Math.hypot(e.c.re, e.c.im) > CANCELLED * largest);
   let keptNorm2 = 0;
   for (const e of kept) keptNorm2 += e.c.re * e.c.re + e.c.im * e.c.im;
