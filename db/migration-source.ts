@@ -2,9 +2,11 @@
 // Add each new migration file here, in order.
 import type { Knex } from 'knex';
 import * as initial from './migrations/20261202000001_initial';
+import * as renderCache from './migrations/20261202000002_render_cache';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000001_initial': initial,
+  '20261202000002_render_cache': renderCache,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -11,6 +11,7 @@ import {
   projectListQuery,
   updateProjectBody,
 } from '../../shared/api/schemas';
+import { houseStyleInputSchema, parseHouseStyle } from '../../shared/spec/house-style';
 import { AppError, conflict, notFound } from '../lib/app-error';
 import { currentUser, requireUser } from '../middleware/require-user';
 import { validated } from '../middleware/validate';
@@ -66,6 +67,27 @@ export function projectRoutes(db: Knex): Router {
       await authoriseProject(db, user, params.projectId, 'manage');
       await updateProject(db, params.projectId, body);
       res.json(await findProject(db, user.id, params.projectId));
+    }),
+  );
+
+  // ── House style ───────────────────────────────────────────────────────────
+  r.get(
+    '/:projectId/house-style',
+    validated({ params: projectParams }, async ({ params }, req, res) => {
+      await authoriseProject(db, currentUser(req), params.projectId, 'read');
+      const row = await db('projects').where({ id: params.projectId }).first('house_style');
+      res.json(parseHouseStyle(row.house_style));
+    }),
+  );
+
+  r.put(
+    '/:projectId/house-style',
+    validated({ params: projectParams, body: houseStyleInputSchema }, async ({ params, body }, req, res) => {
+      await authoriseProject(db, currentUser(req), params.projectId, 'manage');
+      await db('projects')
+        .where({ id: params.projectId })
+        .update({ house_style: JSON.stringify(body), updated_at: db.fn.now() });
+      res.json(parseHouseStyle(body));
     }),
   );
 

@@ -34,11 +34,12 @@ export const defaultHouseStyle: HouseStyle = {
   },
 };
 
+/** What a project stores: any subset of the look and print settings. */
+export const houseStyleInputSchema = z.object({ look: lookSchema.default({}), print: printSchema.default({}) });
+
 /** Fills what a house style leaves unset from the product defaults. */
 export function parseHouseStyle(raw: unknown): HouseStyle {
-  const partial = z
-    .object({ look: lookSchema.default({}), print: printSchema.default({}) })
-    .parse(raw ?? {});
+  const partial = houseStyleInputSchema.parse(raw ?? {});
   return {
     look: { ...defaultHouseStyle.look, ...stripUndefined(partial.look) },
     print: { ...defaultHouseStyle.print, ...stripUndefined(partial.print) },

@@ -130,3 +130,23 @@ describe('members', () => {
     expect(await server.db('memberships').where({ project_id: chapter4 }).orderBy('user_id')).toEqual(before);
   });
 });
+
+describe('house style', () => {
+  it('when the owner sets a house style, then members read it with product defaults filling the rest', async () => {
+    const p = (await owner.post('/api/projects', { name: 'Styled' })).body;
+    const put = await owner.put(`/api/projects/${p.id}/house-style`, { look: { positiveColour: '#224488' }, print: { dpi: 600 } });
+    expect(put.status).toBe(200);
+    const got = await owner.get(`/api/projects/${p.id}/house-style`);
+    expect(got.body.look.positiveColour).toBe('#224488');
+    expect(got.body.print).toMatchObject({ dpi: 600, widthMm: 84 });
+  });
+
+  it('when an editor changes the house style or sends a bad colour, then it is refused and unchanged', async () => {
+    const before = await server.db('projects').where({ id: chapter4 }).first('house_style');
+    expect((await editor.put(`/api/projects/${chapter4}/house-style`, { look: {} })).status).toBe(403);
+    const bad = await owner.put(`/api/projects/${chapter4}/house-style`, { look: { positiveColour: 'red' } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toHaveProperty('look.positiveColour');
+    expect(await server.db('projects').where({ id: chapter4 }).first('house_style')).toEqual(before);
+  });
+});
