@@ -1,0 +1,92 @@
+// Every saved revision of a figure, newest first, with who saved it, when and their note.
+// A revision can be opened to read what it held.
+import { Fragment, useState } from 'react';
+import { Button } from '../../../components/ui/button';
+import { ErrorPanel, Loading } from '../../../components/ui/status';
+import { formatDateTime } from '../../../utils/format-date';
+import { useRevisions } from '../api/get-revisions';
+import { RevisionDetails } from './revision-details';
+
+interface RevisionListProps {
+  figureId: number;
+  currentRevision: number;
+  approvedRevision: number | null;
+}
+
+export function RevisionList({ figureId, currentRevision, approvedRevision }: RevisionListProps) {
+  const revisions = useRevisions(figureId);
+  const [open, setOpen] = useState<number | null>(null);
+
+  if (revisions.isPending) return <Loading label="Loading revisions…" />;
+  if (revisions.isError)
+    return <ErrorPanel error={revisions.error} onRetry={() => void revisions.refetch()} />;
+
+  const rows = [...revisions.data].sort((a, b) => b.revision - a.revision);
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full border-collapse text-sm">
+        <caption className="sr-only">Saved revisions, newest first</caption>
+        <thead className="border-b border-stone-200 text-left text-stone-700">
+          <tr>
+            <th scope="col" className="py-2 pr-3 font-semibold">
+              Revision
+            </th>
+            <th scope="col" className="py-2 pr-3 font-semibold">
+              Saved by
+            </th>
+            <th scope="col" className="py-2 pr-3 font-semibold">
+              When
+            </th>
+            <th scope="col" className="py-2 pr-3 font-semibold">
+              Note
+            </th>
+            <th scope="col" className="py-2 font-semibold">
+              <span className="sr-only">Details</span>
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <Fragment key={r.revision}>
+              <tr className="border-b border-stone-100">
+                <th scope="row" className="py-2 pr-3 text-left font-semibold tabular-nums">
+                  {r.revision}
+                  {r.revision === currentRevision && (
+                    <span className="ml-2 text-xs font-normal text-stone-600">latest</span>
+                  )}
+                  {r.revision === approvedRevision && (
+                    <span className="ml-2 text-xs font-semibold text-emerald-800">approved</span>
+                  )}
+                </th>
+                <td className="py-2 pr-3">{r.authorName}</td>
+                <td className="py-2 pr-3 whitespace-nowrap">{formatDateTime(r.createdAt)}</td>
+                <td className="py-2 pr-3 text-stone-700">
+                  {r.message || <span className="text-stone-500">—</span>}
+                </td>
+                <td className="py-2 text-right">
+                  <Button
+                    size="sm"
+                    variant="quiet"
+                    aria-expanded={open === r.revision}
+                    aria-controls={`revision-${r.revision}`}
+                    onClick={() => setOpen(open === r.revision ? null : r.revision)}
+                  >
+                    {open === r.revision ? 'Hide' : 'Show'}
+                    <span className="sr-only"> revision {r.revision}</span>
+                  </Button>
+                </td>
+              </tr>
+              {open === r.revision && (
+                <tr id={`revision-${r.revision}`} className="border-b border-stone-100 bg-stone-50">
+                  <td colSpan={5} className="p-4">
+                    <RevisionDetails figureId={figureId} revision={r.revision} />
+                  </td>
+                </tr>
+              )}
+            </Fragment>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,127 @@
+// A figure spec summarised in words, as label/value pairs for the figure page. Stored values
+// only; unset look and print settings are said to come from the house style.
+import type { FigureSpec, SpecTerm } from '../../../../shared/spec/figure-spec';
+import { figureKindInfo } from './figure-kinds';
+import { lLetter, orbitalLabel } from './orbital-label';
+
+export interface SpecLine {
+  term: string;
+  detail: string;
+}
+
+const percent = (fraction: number) => `${+(fraction * 100).toFixed(1)} %`;
+const list = (items: string[]) =>
+  items.length <= 1
+    ? (items[0] ?? '')
+    : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
+
+const UNIT_NAMES = { bohr: 'bohr', pm: 'pm', angstrom: 'Å' } as const;
+const PLANES = { xy: 'xy plane', xz: 'xz plane', yz: 'yz plane' } as const;
+const RADIAL_QUANTITIES = {
+  R: 'R(r)',
+  r2R2: 'r²R²',
+  cumulative: 'cumulative probability',
+  veff: 'V_eff',
+} as const;
+
+function termLabel(t: SpecTerm): string {
+  return orbitalLabel(t.n, t.l, t.m, t.basis);
+}
+
+function describeState(spec: FigureSpec): string {
+  const { terms, time } = spec.state;
+  const at = time > 0 ? ` at t = ${time} ħ/E_h` : '';
+  if (terms.length === 1)
+    return `${termLabel(terms[0])} (n = ${terms[0].n}, l = ${terms[0].l}, m = ${terms[0].m}), ${terms[0].basis} form${at}`;
+  return `Superposition of ${terms.length} states: ${list(terms.map(termLabel))}${at}`;
+}
+
+function describeSystem(spec: FigureSpec): string {
+  const { Z, nucleus, lengthUnit } = spec.system;
+  const atom = Z === 1 ? 'Hydrogen (Z = 1)' : `Hydrogen-like ion, Z = ${Z}`;
+  const mass =
+    nucleus === 'infinite'
+      ? 'nucleus of infinite mass'
+      : typeof nucleus === 'string'
+        ? `reduced mass for ${nucleus}`
+        : `nucleus of ${nucleus.massInElectronMasses} electron masses`;
+  return `${atom}, ${mass}; lengths in ${UNIT_NAMES[lengthUnit]}`;
+}
+
+type Plane = Extract<FigureSpec['kind'], { type: 'slice' }>['plane'];
+
+function planeName(plane: Plane): string {
+  return typeof plane === 'string'
+    ? PLANES[plane]
+    : `plane with normal (${plane.normal.join(', ')})`;
+}
+
+function describeKind(spec: FigureSpec): string {
+  const k = spec.kind;
+  switch (k.type) {
+    case 'isosurface': {
+      const outer = k.outerSurface
+        ? `; outer surface at ${percent(k.outerSurface.enclosed)}, opacity ${k.outerSurface.opacity}`
+        : '';
+      return `Surface enclosing ${percent(k.enclosed)} of the probability, grid of ${k.grid} points a side${outer}`;
+    }
+    case 'slice': {
+      const what = k.quantity === 'psi' ? 'signed wavefunction ψ' : 'probability density |ψ|²';
+      const contours =
+        k.contours.mode === 'enclosed'
+          ? k.contours.fractions.length
+            ? `contours enclosing ${list(k.contours.fractions.map(percent))}`
+            : 'no contours'
+          : `${k.contours.levels.length} contour levels`;
+      return `${what} in the ${planeName(k.plane)}, ${contours}, ${k.resolution} × ${k.resolution} samples`;
+    }
+    case 'radial':
+      return list(k.curves.map((c) => `${RADIAL_QUANTITIES[c.quantity]} of ${c.n}${lLetter(c.l)}`));
+    case 'cloud':
+      return `${k.points.toLocaleString('en-GB')} points, random seed ${k.seed}`;
+    case 'angular':
+      return `${k.mode === 'surface' ? 'Surface' : `Polar curve in the ${planeName(k.plane)}`} of ${k.quantity === 'abs' ? '|Y|' : 'the real angular part'}`;
+    case 'levels':
+      return `Levels up to n = ${k.nMax}${k.transitions.length ? `, transitions ${list(k.transitions.map((t) => `${t.upper} → ${t.lower}`))}` : ''}`;
+  }
+}
+
+function describePrint(spec: FigureSpec): string {
+  const p = spec.print;
+  const parts = [
+    p.widthMm !== undefined && p.heightMm !== undefined
+      ? `${p.widthMm} × ${p.heightMm} mm`
+      : p.widthMm !== undefined
+        ? `${p.widthMm} mm wide`
+        : null,
+    p.dpi !== undefined ? `${p.dpi} dpi` : null,
+    p.background !== undefined ? `${p.background} background` : null,
+    p.formats !== undefined ? p.formats.map((f) => f.toUpperCase()).join(' + ') : null,
+  ].filter((x): x is string => x !== null);
+  return parts.length
+    ? `${parts.join(', ')}; the rest from the house style`
+    : 'All from the house style';
+}
+
+export function describeSpec(spec: FigureSpec): SpecLine[] {
+  const lines: SpecLine[] = [
+    { term: 'Kind', detail: figureKindInfo[spec.kind.type].name },
+    { term: 'State', detail: describeState(spec) },
+    { term: 'Atom', detail: describeSystem(spec) },
+    { term: 'Drawing', detail: describeKind(spec) },
+  ];
+  if (
+    spec.kind.type === 'isosurface' ||
+    spec.kind.type === 'cloud' ||
+    (spec.kind.type === 'angular' && spec.kind.mode === 'surface')
+  ) {
+    const v = spec.view;
+    lines.push({
+      term: 'View',
+      detail: `Azimuth ${v.azimuthDeg}°, elevation ${v.elevationDeg}°, ${v.projection}, zoom ${v.zoom}`,
+    });
+  }
+  lines.push({ term: 'Print', detail: describePrint(spec) });
+  if (spec.look.label) lines.push({ term: 'Label', detail: spec.look.label });
+  return lines;
+}

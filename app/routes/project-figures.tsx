@@ -1,0 +1,61 @@
+// /projects/:projectId: the project's figures, and (for editors) a way to add one.
+import { useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { useNavigate } from 'react-router';
+import { roleAllows } from '../../shared/api/roles';
+import { Button } from '../components/ui/button';
+import { Dialog } from '../components/ui/dialog';
+import { ErrorPanel, Loading } from '../components/ui/status';
+import { useFigures } from '../features/figures/api/get-figures';
+import { CreateFigureForm } from '../features/figures/components/create-figure-form';
+import { FigureTable } from '../features/figures/components/figure-table';
+import { projectsQueryKey } from '../features/projects/api/get-projects';
+import { useProjectFromLayout } from './project-layout';
+
+export function ProjectFiguresRoute() {
+  const project = useProjectFromLayout();
+  const figures = useFigures(project.id);
+  const [creating, setCreating] = useState(false);
+  const navigate = useNavigate();
+  const queryClient = useQueryClient();
+  const canEdit = roleAllows(project.role, 'edit') && !project.archived;
+
+  return (
+    <section aria-labelledby="figures-title" className="space-y-4">
+      <div className="flex flex-wrap items-center justify-between gap-4">
+        <h2 id="figures-title" className="text-lg font-semibold">
+          Figures
+        </h2>
+        {canEdit && (
+          <Button variant="primary" onClick={() => setCreating(true)}>
+            New figure
+          </Button>
+        )}
+      </div>
+      {figures.isPending ? (
+        <Loading label="Loading figures…" />
+      ) : figures.isError ? (
+        <ErrorPanel error={figures.error} onRetry={() => void figures.refetch()} />
+      ) : (
+        <FigureTable figures={figures.data} />
+      )}
+      <Dialog
+        open={creating}
+        onClose={() => setCreating(false)}
+        title="New figure"
+        description="Pick what to draw and which orbital; colours, size and resolution start from the project’s house style and can be changed later."
+      >
+        <CreateFigureForm
+          projectId={project.id}
+          onCancel={() => setCreating(false)}
+          onCreated={(figure) => {
+            setCreating(false);
+            // The project's figure count changed too.
+            void queryClient.invalidateQueries({ queryKey: projectsQueryKey });
+            void navigate(`/figures/${figure.id}`);
+          }}
+        />
+      </Dialog>
+    </section>
+  );
+}
