@@ -1,0 +1,54 @@
+// The route table: which page answers which address. Pages live in routes/ and compose features.
+import { createBrowserRouter, Outlet } from 'react-router';
+import { RouterProvider } from 'react-router/dom';
+import { RequireUser } from './features/auth/components/require-user';
+import { AdminRoute } from './routes/admin';
+import { AppLayout } from './routes/app-layout';
+import { FigureRoute } from './routes/figure';
+import { NotFoundRoute } from './routes/not-found';
+import { ProjectFiguresRoute } from './routes/project-figures';
+import { ProjectLayout } from './routes/project-layout';
+import { ProjectMembersRoute } from './routes/project-members';
+import { ProjectSettingsRoute } from './routes/project-settings';
+import { ProjectsRoute } from './routes/projects';
+import { RouteError } from './routes/route-error';
+import { SignInRoute } from './routes/sign-in';
+import { SignUpRoute } from './routes/sign-up';
+
+const router = createBrowserRouter([
+  {
+    element: <Outlet />,
+    errorElement: <RouteError />,
+    children: [
+      { path: '/sign-in', element: <SignInRoute /> },
+      { path: '/sign-up', element: <SignUpRoute /> },
+      {
+        element: (
+          <RequireUser>
+            <AppLayout />
+          </RequireUser>
+        ),
+        errorElement: <RouteError />,
+        children: [
+          { path: '/', element: <ProjectsRoute /> },
+          {
+            path: '/projects/:projectId',
+            element: <ProjectLayout />,
+            children: [
+              { index: true, element: <ProjectFiguresRoute /> },
+              { path: 'members', element: <ProjectMembersRoute /> },
+              { path: 'settings', element: <ProjectSettingsRoute /> },
+            ],
+          },
+          { path: '/figures/:figureId', element: <FigureRoute /> },
+          { path: '/admin', element: <AdminRoute /> },
+          { path: '*', element: <NotFoundRoute /> },
+        ],
+      },
+    ],
+  },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}
