@@ -23,7 +23,12 @@ export interface Spherical {
   phi: number;
 }
 
-export function cartesianToSpherical(x: number, y: number, z: number, out: Spherical = { r: 0, theta: 0, phi: 0 }): Spherical {
+export function cartesianToSpherical(
+  x: number,
+  y: number,
+  z: number,
+  out: Spherical = { r: 0, theta: 0, phi: 0 },
+): Spherical {
   const rho = Math.hypot(x, y);
   out.r = Math.hypot(rho, z);
   out.theta = Math.atan2(rho, z);
@@ -31,7 +36,12 @@ export function cartesianToSpherical(x: number, y: number, z: number, out: Spher
   return out;
 }
 
-export function sphericalToCartesian(r: number, theta: number, phi: number, out: Vec3 = { x: 0, y: 0, z: 0 }): Vec3 {
+export function sphericalToCartesian(
+  r: number,
+  theta: number,
+  phi: number,
+  out: Vec3 = { x: 0, y: 0, z: 0 },
+): Vec3 {
   const s = Math.sin(theta);
   out.x = r * s * Math.cos(phi);
   out.y = r * s * Math.sin(phi);
@@ -39,14 +49,24 @@ export function sphericalToCartesian(r: number, theta: number, phi: number, out:
   return out;
 }
 
-export function physicsToThree(x: number, y: number, z: number, out: Vec3 = { x: 0, y: 0, z: 0 }): Vec3 {
+export function physicsToThree(
+  x: number,
+  y: number,
+  z: number,
+  out: Vec3 = { x: 0, y: 0, z: 0 },
+): Vec3 {
   out.x = x;
   out.y = z;
   out.z = -y;
   return out;
 }
 
-export function threeToPhysics(x: number, y: number, z: number, out: Vec3 = { x: 0, y: 0, z: 0 }): Vec3 {
+export function threeToPhysics(
+  x: number,
+  y: number,
+  z: number,
+  out: Vec3 = { x: 0, y: 0, z: 0 },
+): Vec3 {
   out.x = x;
   out.y = -z;
   out.z = y;

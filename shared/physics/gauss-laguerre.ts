@@ -21,7 +21,9 @@ export function gaussLaguerre(m: number): QuadratureRule {
   if (hit) return hit;
   const zeros = laguerreZeros(m, 0);
   const nodes = Float64Array.from(zeros);
-  const logWeights = nodes.map((x) => Math.log(x) - 2 * Math.log(m + 1) - 2 * Math.log(Math.abs(assocLaguerre(m + 1, 0, x))));
+  const logWeights = nodes.map(
+    (x) => Math.log(x) - 2 * Math.log(m + 1) - 2 * Math.log(Math.abs(assocLaguerre(m + 1, 0, x))),
+  );
   const rule = { nodes, weights: logWeights.map(Math.exp), logWeights };
   cache.set(m, rule);
   return rule;

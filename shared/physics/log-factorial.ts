@@ -10,6 +10,7 @@ const table = new Float64Array(TABLE_SIZE);
 for (let i = 2; i < TABLE_SIZE; i++) table[i] = table[i - 1] + Math.log(i);
 
 export function logFactorial(k: number): number {
-  if (!Number.isInteger(k) || k < 0 || k >= TABLE_SIZE) throw new RangeError(`logFactorial: k must be an integer in 0…${TABLE_SIZE - 1}`);
+  if (!Number.isInteger(k) || k < 0 || k >= TABLE_SIZE)
+    throw new RangeError(`logFactorial: k must be an integer in 0…${TABLE_SIZE - 1}`);
   return table[k];
 }

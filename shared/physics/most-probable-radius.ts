@@ -36,7 +36,11 @@ function maximaInRho(n: number, l: number): number[] {
 }
 
 function logDistribution(n: number, l: number, rho: number): number {
-  return (2 * l + 2) * Math.log(rho) - rho + 2 * Math.log(Math.abs(assocLaguerre(n - l - 1, 2 * l + 1, rho)));
+  return (
+    (2 * l + 2) * Math.log(rho) -
+    rho +
+    2 * Math.log(Math.abs(assocLaguerre(n - l - 1, 2 * l + 1, rho)))
+  );
 }
 
 /** All local maxima of r²R_nl(r)², ascending, in bohr. */
@@ -51,6 +55,7 @@ export function mostProbableRadius(n: number, l: number, Z = 1, muRatio = 1): nu
   const p = checkRadialInput(n, l, Z, muRatio);
   const maxima = maximaInRho(p.n, p.l);
   let best = maxima[0];
-  for (const rho of maxima) if (logDistribution(p.n, p.l, rho) > logDistribution(p.n, p.l, best)) best = rho;
+  for (const rho of maxima)
+    if (logDistribution(p.n, p.l, rho) > logDistribution(p.n, p.l, best)) best = rho;
   return (best * p.n) / (2 * p.zEff);
 }

@@ -28,7 +28,12 @@ export function recurrenceB(l: number, m: number): number {
 }
 
 /** P̄_l^m(cos θ) with m ≥ 0 (internal: callers validate l, m). */
-export function normalisedLegendre(l: number, m: number, cosTheta: number, sinTheta: number): number {
+export function normalisedLegendre(
+  l: number,
+  m: number,
+  cosTheta: number,
+  sinTheta: number,
+): number {
   let pmm = sectoralStart(m) * Math.pow(sinTheta, m);
   if (l === m) return pmm;
   let p1 = Math.sqrt(2 * m + 3) * cosTheta * pmm;

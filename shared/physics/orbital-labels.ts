@@ -31,7 +31,15 @@ export function angularMomentumLetter(l: number): string {
 const REAL_SUBSCRIPTS: Record<number, Record<number, string>> = {
   1: { 1: 'x', [-1]: 'y', 0: 'z' },
   2: { [-2]: 'xy', [-1]: 'yz', 0: 'z²', 1: 'xz', 2: 'x²−y²' },
-  3: { [-3]: 'y(3x²−y²)', [-2]: 'xyz', [-1]: 'yz²', 0: 'z³', 1: 'xz²', 2: 'z(x²−y²)', 3: 'x(x²−3y²)' },
+  3: {
+    [-3]: 'y(3x²−y²)',
+    [-2]: 'xyz',
+    [-1]: 'yz²',
+    0: 'z³',
+    1: 'xz²',
+    2: 'z(x²−y²)',
+    3: 'x(x²−3y²)',
+  },
 };
 
 function signedM(m: number): string {

@@ -104,12 +104,23 @@ const REAL_TOLERANCE = 1e-12;
 
 function readWeight(term: OrbitalTerm, field: string): Complex {
   if (term.weight === undefined) return { re: 1, im: 0 };
-  if (typeof term.weight !== 'object' || term.weight === null) throw new OrbitalInputError(field, 'must be { re, im }');
-  return { re: checkFinite(term.weight.re, `${field}.re`), im: checkFinite(term.weight.im, `${field}.im`) };
+  if (typeof term.weight !== 'object' || term.weight === null)
+    throw new OrbitalInputError(field, 'must be { re, im }');
+  return {
+    re: checkFinite(term.weight.re, `${field}.re`),
+    im: checkFinite(term.weight.im, `${field}.im`),
+  };
 }
 
 /** Adds w·Y_l^m to the complex-basis map. */
-function add(map: Map<string, { n: number; l: number; m: number; c: Complex }>, n: number, l: number, m: number, re: number, im: number): void {
+function add(
+  map: Map<string, { n: number; l: number; m: number; c: Complex }>,
+  n: number,
+  l: number,
+  m: number,
+  re: number,
+  im: number,
+): void {
   const key = `${n},${l},${m}`;
   const entry = map.get(key) ?? { n, l, m, c: { re: 0, im: 0 } };
   entry.c.re += re;
@@ -117,7 +128,14 @@ function add(map: Map<string, { n: number; l: number; m: number; c: Complex }>, 
   map.set(key, entry);
 }
 
-function compileRealTerm(n: number, l: number, m: number, coefficient: Complex, zEff: number, distinctN: number[]): CompiledRealTerm {
+function compileRealTerm(
+  n: number,
+  l: number,
+  m: number,
+  coefficient: Complex,
+  zEff: number,
+  distinctN: number[],
+): CompiledRealTerm {
   const a = (2 * zEff) / n;
   return {
     n,
@@ -134,23 +152,31 @@ function compileRealTerm(n: number, l: number, m: number, coefficient: Complex, 
 }
 
 export function compileState(state: OrbitalState): CompiledState {
-  if (typeof state !== 'object' || state === null) throw new OrbitalInputError('state', 'must be an object');
+  if (typeof state !== 'object' || state === null)
+    throw new OrbitalInputError('state', 'must be an object');
   const Z = checkNuclearCharge(state.Z);
   const muRatio = reducedMassRatio(Z, state.reducedMass);
   const zEff = Z * muRatio;
   const time = state.time === undefined ? 0 : checkFinite(state.time, 'time');
-  if (!Array.isArray(state.terms) || state.terms.length === 0) throw new OrbitalInputError('terms', 'must be a non-empty list');
-  if (state.terms.length > MAX_STATE_TERMS) throw new OrbitalInputError('terms', `at most ${MAX_STATE_TERMS} terms, got ${state.terms.length}`);
+  if (!Array.isArray(state.terms) || state.terms.length === 0)
+    throw new OrbitalInputError('terms', 'must be a non-empty list');
+  if (state.terms.length > MAX_STATE_TERMS)
+    throw new OrbitalInputError(
+      'terms',
+      `at most ${MAX_STATE_TERMS} terms, got ${state.terms.length}`,
+    );
 
   const complexBasis = new Map<string, { n: number; l: number; m: number; c: Complex }>();
   let weightGiven = 0;
   state.terms.forEach((term, i) => {
     const f = `terms[${i}]`;
-    if (typeof term !== 'object' || term === null) throw new OrbitalInputError(f, 'must be an object');
+    if (typeof term !== 'object' || term === null)
+      throw new OrbitalInputError(f, 'must be an object');
     const n = checkPrincipal(term.n, `${f}.n`);
     const l = checkAngular(term.l, n, `${f}.l`);
     const m = checkMagnetic(term.m, l, `${f}.m`);
-    if (term.basis !== 'real' && term.basis !== 'complex') throw new OrbitalInputError(`${f}.basis`, 'must be "real" or "complex"');
+    if (term.basis !== 'real' && term.basis !== 'complex')
+      throw new OrbitalInputError(`${f}.basis`, 'must be "real" or "complex"');
     const w = readWeight(term, `${f}.weight`);
     weightGiven += Math.hypot(w.re, w.im);
     if (term.basis === 'complex' || m === 0) {
@@ -177,7 +203,11 @@ export function compileState(state: OrbitalState): CompiledState {
     norm2 += a2;
     largest = Math.max(largest, Math.sqrt(a2));
   }
-  if (!(Math.sqrt(norm2) > CANCELLED * weightGiven)) throw new OrbitalInputError('terms', 'the total weight is zero (the terms cancel or all weights are 0)');
+  if (!(Math.sqrt(norm2) > CANCELLED * weightGiven))
+    throw new OrbitalInputError(
+      'terms',
+      'the total weight is zero (the terms cancel or all weights are 0)',
+    );
   const kept = entries.filter((e) => Math.hypot(e.c.re, e.c.im) > CANCELLED * largest);
   let keptNorm2 = 0;
   for (const e of kept) keptNorm2 += e.c.re * e.c.re + e.c.im * e.c.im;
@@ -218,7 +248,8 @@ export function compileState(state: OrbitalState): CompiledState {
     realCoefficients.push({ n: e.n, l: e.l, m: -mAbs, c: { re: -difIm, im: difRe } });
   }
   let biggest = realCoefficients[0];
-  for (const r of realCoefficients) if (Math.hypot(r.c.re, r.c.im) > Math.hypot(biggest.c.re, biggest.c.im)) biggest = r;
+  for (const r of realCoefficients)
+    if (Math.hypot(r.c.re, r.c.im) > Math.hypot(biggest.c.re, biggest.c.im)) biggest = r;
   const biggestSize = Math.hypot(biggest.c.re, biggest.c.im);
   const real = realCoefficients.filter((r) => Math.hypot(r.c.re, r.c.im) > CANCELLED * biggestSize);
 
@@ -227,8 +258,13 @@ export function compileState(state: OrbitalState): CompiledState {
   if (phase > Math.PI / 2) phase -= Math.PI;
   if (phase <= -Math.PI / 2) phase += Math.PI;
   const undo = { re: Math.cos(phase), im: -Math.sin(phase) };
-  const isReal = real.every((r) => Math.abs(r.c.re * undo.im + r.c.im * undo.re) <= REAL_TOLERANCE * biggestSize);
-  const rotate = (c: Complex): Complex => (isReal ? { re: c.re * undo.re - c.im * undo.im, im: c.re * undo.im + c.im * undo.re } : { ...c });
+  const isReal = real.every(
+    (r) => Math.abs(r.c.re * undo.im + r.c.im * undo.re) <= REAL_TOLERANCE * biggestSize,
+  );
+  const rotate = (c: Complex): Complex =>
+    isReal
+      ? { re: c.re * undo.re - c.im * undo.im, im: c.re * undo.im + c.im * undo.re }
+      : { ...c };
 
   const distinctN = [...new Set(real.map((r) => r.n))].sort((p, q) => p - q);
   const realTerms = real.map((r) => {
@@ -253,7 +289,16 @@ export function compileState(state: OrbitalState): CompiledState {
  * Adds ψ(x, y, z) of all real-basis terms into out; r2 = x² + y² + z², expN[i] = e^{−Z_eff r / distinctN[i]}.
  * Shared by evaluatePsi and the grid sampler so both compute exactly the same numbers.
  */
-export function accumulateTerms(c: CompiledState, x: number, y: number, z: number, r: number, r2: number, expN: Float64Array, out: Complex): Complex {
+export function accumulateTerms(
+  c: CompiledState,
+  x: number,
+  y: number,
+  z: number,
+  r: number,
+  r2: number,
+  expN: Float64Array,
+  out: Complex,
+): Complex {
   let re = 0;
   let im = 0;
   const terms = c.realTerms;
@@ -278,7 +323,13 @@ export function fillExponentials(c: CompiledState, r: number, expN: Float64Array
 /** ψ(x, y, z) of a compiled state, x, y, z in bohr, ψ in bohr^(−3/2) (global phase as in the header). */
 const scratchExponentials = new Float64Array(MAX_PRINCIPAL_QUANTUM_NUMBER + 1);
 
-export function evaluatePsi(c: CompiledState, x: number, y: number, z: number, out: Complex): Complex {
+export function evaluatePsi(
+  c: CompiledState,
+  x: number,
+  y: number,
+  z: number,
+  out: Complex,
+): Complex {
   const r2 = x * x + y * y + z * z;
   const r = Math.sqrt(r2);
   fillExponentials(c, r, scratchExponentials);

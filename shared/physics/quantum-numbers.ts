@@ -11,8 +11,10 @@ export const MAX_PRINCIPAL_QUANTUM_NUMBER = 30;
 export const MAX_ANGULAR_MOMENTUM = 30;
 
 function requireInteger(value: unknown, field: string): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw new OrbitalInputError(field, 'must be a finite number');
-  if (!Number.isInteger(value)) throw new OrbitalInputError(field, `must be an integer, got ${value}`);
+  if (typeof value !== 'number' || !Number.isFinite(value))
+    throw new OrbitalInputError(field, 'must be a finite number');
+  if (!Number.isInteger(value))
+    throw new OrbitalInputError(field, `must be an integer, got ${value}`);
   return value;
 }
 
@@ -20,7 +22,10 @@ export function checkPrincipal(n: unknown, field = 'n'): number {
   const v = requireInteger(n, field);
   if (v < 1) throw new OrbitalInputError(field, `n must be at least 1, got ${v}`);
   if (v > MAX_PRINCIPAL_QUANTUM_NUMBER) {
-    throw new OrbitalInputError(field, `n must be at most ${MAX_PRINCIPAL_QUANTUM_NUMBER}, got ${v}`);
+    throw new OrbitalInputError(
+      field,
+      `n must be at most ${MAX_PRINCIPAL_QUANTUM_NUMBER}, got ${v}`,
+    );
   }
   return v;
 }
@@ -29,8 +34,10 @@ export function checkPrincipal(n: unknown, field = 'n'): number {
 export function checkAngular(l: unknown, n: number | null, field = 'l'): number {
   const v = requireInteger(l, field);
   if (v < 0) throw new OrbitalInputError(field, `l must not be negative, got ${v}`);
-  if (n !== null && v >= n) throw new OrbitalInputError(field, `l must be less than n = ${n}, got ${v}`);
-  if (v > MAX_ANGULAR_MOMENTUM) throw new OrbitalInputError(field, `l must be at most ${MAX_ANGULAR_MOMENTUM}, got ${v}`);
+  if (n !== null && v >= n)
+    throw new OrbitalInputError(field, `l must be less than n = ${n}, got ${v}`);
+  if (v > MAX_ANGULAR_MOMENTUM)
+    throw new OrbitalInputError(field, `l must be at most ${MAX_ANGULAR_MOMENTUM}, got ${v}`);
   return v;
 }
 
@@ -51,7 +58,10 @@ export function checkNuclearCharge(Z: unknown, field = 'Z'): number {
 /** Reduced-mass ratio μ/m_e, which must lie in (0, 1]. */
 export function checkMassRatio(mu: unknown, field = 'muRatio'): number {
   if (typeof mu !== 'number' || !Number.isFinite(mu) || mu <= 0 || mu > 1) {
-    throw new OrbitalInputError(field, `reduced-mass ratio μ/m_e must be in (0, 1], got ${String(mu)}`);
+    throw new OrbitalInputError(
+      field,
+      `reduced-mass ratio μ/m_e must be in (0, 1], got ${String(mu)}`,
+    );
   }
   return mu;
 }
@@ -64,12 +74,23 @@ export function checkRadius(r: unknown, field = 'r'): number {
 }
 
 export function checkFinite(v: unknown, field: string): number {
-  if (typeof v !== 'number' || !Number.isFinite(v)) throw new OrbitalInputError(field, 'must be a finite number');
+  if (typeof v !== 'number' || !Number.isFinite(v))
+    throw new OrbitalInputError(field, 'must be a finite number');
   return v;
 }
 
 /** l, m and a direction (θ, φ) in radians, validated together for the angular functions. */
-export function checkDirection(l: unknown, m: unknown, theta: unknown, phi: unknown): { l: number; m: number; theta: number; phi: number } {
+export function checkDirection(
+  l: unknown,
+  m: unknown,
+  theta: unknown,
+  phi: unknown,
+): { l: number; m: number; theta: number; phi: number } {
   const ll = checkAngular(l, null);
-  return { l: ll, m: checkMagnetic(m, ll), theta: checkFinite(theta, 'theta'), phi: checkFinite(phi, 'phi') };
+  return {
+    l: ll,
+    m: checkMagnetic(m, ll),
+    theta: checkFinite(theta, 'theta'),
+    phi: checkFinite(phi, 'phi'),
+  };
 }

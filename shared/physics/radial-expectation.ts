@@ -19,7 +19,12 @@ export interface RadialExpectationValues {
   invR3: number;
 }
 
-export function radialExpectationValues(n: number, l: number, Z = 1, muRatio = 1): RadialExpectationValues {
+export function radialExpectationValues(
+  n: number,
+  l: number,
+  Z = 1,
+  muRatio = 1,
+): RadialExpectationValues {
   const p = checkRadialInput(n, l, Z, muRatio);
   const nn = p.n;
   const L = p.l * (p.l + 1);
@@ -29,7 +34,13 @@ export function radialExpectationValues(n: number, l: number, Z = 1, muRatio = 1
   return {
     r: (3 * n2 - L) / 2 / z,
     r2: (n2 * (5 * n2 + 1 - 3 * L)) / 2 / (z * z),
-    r3: (n2 * (35 * n2 * (n2 - 1) - 30 * n2 * (p.l + 2) * (p.l - 1) + 3 * (p.l + 2) * (p.l + 1) * p.l * (p.l - 1))) / 8 / (z * z * z),
+    r3:
+      (n2 *
+        (35 * n2 * (n2 - 1) -
+          30 * n2 * (p.l + 2) * (p.l - 1) +
+          3 * (p.l + 2) * (p.l + 1) * p.l * (p.l - 1))) /
+      8 /
+      (z * z * z),
     invR: z / n2,
     invR2: (z * z) / (n3 * (p.l + 0.5)),
     invR3: p.l === 0 ? Infinity : (z * z * z) / (n3 * p.l * (p.l + 0.5) * (p.l + 1)),

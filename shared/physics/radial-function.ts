@@ -14,7 +14,13 @@
  */
 import { assocLaguerre } from './assoc-laguerre';
 import { logFactorial } from './log-factorial';
-import { checkAngular, checkMassRatio, checkNuclearCharge, checkPrincipal, checkRadius } from './quantum-numbers';
+import {
+  checkAngular,
+  checkMassRatio,
+  checkNuclearCharge,
+  checkPrincipal,
+  checkRadius,
+} from './quantum-numbers';
 
 /** ln of the normalisation constant √[a³ (n−l−1)!/(2n (n+l)!)], a = 2 Z_eff / n. */
 export function radialLogNormalisation(n: number, l: number, zEff: number): number {
@@ -29,12 +35,18 @@ export function radialValue(n: number, l: number, r: number, zEff: number): numb
   if (rho === 0) return l === 0 ? poly * Math.exp(radialLogNormalisation(n, l, zEff)) : 0;
   if (poly === 0) return 0;
   if (!Number.isFinite(rho)) return 0;
-  const logMagnitude = radialLogNormalisation(n, l, zEff) + l * Math.log(rho) - rho / 2 + Math.log(Math.abs(poly));
+  const logMagnitude =
+    radialLogNormalisation(n, l, zEff) + l * Math.log(rho) - rho / 2 + Math.log(Math.abs(poly));
   return Math.sign(poly) * Math.exp(logMagnitude);
 }
 
 /** Validates (n, l, Z, μ) and returns Z_eff = Z μ. */
-export function checkRadialInput(n: unknown, l: unknown, Z: unknown, muRatio: unknown): { n: number; l: number; zEff: number } {
+export function checkRadialInput(
+  n: unknown,
+  l: unknown,
+  Z: unknown,
+  muRatio: unknown,
+): { n: number; l: number; zEff: number } {
   const nn = checkPrincipal(n);
   const ll = checkAngular(l, nn);
   return { n: nn, l: ll, zEff: checkNuclearCharge(Z) * checkMassRatio(muRatio) };

@@ -50,7 +50,9 @@ function lowerPart(n: number, l: number, logC: number, rho: number): number {
   for (let p = 0; p < panels; p++) {
     const centre = (2 * p + 1) * half;
     for (let i = 0; i < rule.nodes.length; i++) {
-      sum += Math.exp(rule.logWeights[i] + logHalf + logIntegrand(n, l, logC, centre + half * rule.nodes[i]));
+      sum += Math.exp(
+        rule.logWeights[i] + logHalf + logIntegrand(n, l, logC, centre + half * rule.nodes[i]),
+      );
     }
   }
   return sum;
@@ -76,7 +78,13 @@ export function radialDistribution(n: number, l: number, r: number, Z = 1, muRat
 }
 
 /** Probability of finding the electron within radius r (bohr): P_nl(r) ∈ [0, 1]. */
-export function cumulativeRadialProbability(n: number, l: number, r: number, Z = 1, muRatio = 1): number {
+export function cumulativeRadialProbability(
+  n: number,
+  l: number,
+  r: number,
+  Z = 1,
+  muRatio = 1,
+): number {
   const p = checkRadialInput(n, l, Z, muRatio);
   return cumulativeValue(p.n, p.l, checkRadius(r), p.zEff);
 }

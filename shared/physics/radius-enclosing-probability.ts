@@ -17,8 +17,18 @@ export function enclosingRadiusValue(n: number, l: number, p: number, zEff: numb
   return bisectRoot((r) => cumulativeValue(n, l, r, zEff) - p, 0, hi);
 }
 
-export function radiusEnclosingProbability(n: number, l: number, p: number, Z = 1, muRatio = 1): number {
+export function radiusEnclosingProbability(
+  n: number,
+  l: number,
+  p: number,
+  Z = 1,
+  muRatio = 1,
+): number {
   const q = checkRadialInput(n, l, Z, muRatio);
-  if (typeof p !== 'number' || !(p > 0 && p < 1)) throw new OrbitalInputError('p', `probability must be strictly between 0 and 1, got ${String(p)}`);
+  if (typeof p !== 'number' || !(p > 0 && p < 1))
+    throw new OrbitalInputError(
+      'p',
+      `probability must be strictly between 0 and 1, got ${String(p)}`,
+    );
   return enclosingRadiusValue(q.n, q.l, p, q.zEff);
 }

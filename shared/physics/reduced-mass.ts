@@ -22,24 +22,40 @@ export const NUCLEAR_MASSES = {
   helium4: ALPHA_PARTICLE_ELECTRON_MASS_RATIO,
 } as const;
 
-export function massRatioForNucleus(nuclearMassInElectronMasses: number, field = 'reducedMass.nuclearMassInElectronMasses'): number {
+export function massRatioForNucleus(
+  nuclearMassInElectronMasses: number,
+  field = 'reducedMass.nuclearMassInElectronMasses',
+): number {
   const M = nuclearMassInElectronMasses;
   if (typeof M !== 'number' || !Number.isFinite(M) || M <= 0) {
-    throw new OrbitalInputError(field, `nuclear mass must be a positive number of electron masses, got ${String(M)}`);
+    throw new OrbitalInputError(
+      field,
+      `nuclear mass must be a positive number of electron masses, got ${String(M)}`,
+    );
   }
   return M / (M + 1);
 }
 
 /** μ/m_e for the given nuclear charge and option (1 when the option is off or absent). */
-export function reducedMassRatio(Z: number, option: ReducedMassOption, field = 'reducedMass'): number {
+export function reducedMassRatio(
+  Z: number,
+  option: ReducedMassOption,
+  field = 'reducedMass',
+): number {
   if (option === undefined || option === false) return 1;
   if (option === true) {
     if (Z === 1) return massRatioForNucleus(NUCLEAR_MASSES.hydrogen1);
     if (Z === 2) return massRatioForNucleus(NUCLEAR_MASSES.helium4);
-    throw new OrbitalInputError(field, `for Z = ${Z} give { nuclearMassInElectronMasses } instead of true (only ¹H and ⁴He are built in)`);
+    throw new OrbitalInputError(
+      field,
+      `for Z = ${Z} give { nuclearMassInElectronMasses } instead of true (only ¹H and ⁴He are built in)`,
+    );
   }
   if (typeof option === 'object' && option !== null) {
-    return massRatioForNucleus(option.nuclearMassInElectronMasses, `${field}.nuclearMassInElectronMasses`);
+    return massRatioForNucleus(
+      option.nuclearMassInElectronMasses,
+      `${field}.nuclearMassInElectronMasses`,
+    );
   }
   throw new OrbitalInputError(field, 'must be true, false or { nuclearMassInElectronMasses }');
 }

@@ -28,22 +28,40 @@ export const MAX_GRID_POINTS_PER_AXIS = 512;
 export const EXTENT_PROBABILITY = 0.999;
 
 function checkGrid(grid: GridSpec): void {
-  if (typeof grid !== 'object' || grid === null) throw new OrbitalInputError('grid', 'must be { n, half }');
+  if (typeof grid !== 'object' || grid === null)
+    throw new OrbitalInputError('grid', 'must be { n, half }');
   if (!Number.isInteger(grid.n) || grid.n < 2 || grid.n > MAX_GRID_POINTS_PER_AXIS) {
-    throw new OrbitalInputError('grid.n', `must be an integer from 2 to ${MAX_GRID_POINTS_PER_AXIS}, got ${String(grid.n)}`);
+    throw new OrbitalInputError(
+      'grid.n',
+      `must be an integer from 2 to ${MAX_GRID_POINTS_PER_AXIS}, got ${String(grid.n)}`,
+    );
   }
   if (typeof grid.half !== 'number' || !Number.isFinite(grid.half) || grid.half <= 0) {
-    throw new OrbitalInputError('grid.half', `must be a positive number of bohr, got ${String(grid.half)}`);
+    throw new OrbitalInputError(
+      'grid.half',
+      `must be a positive number of bohr, got ${String(grid.half)}`,
+    );
   }
 }
 
-export function sampleStateOnGrid(c: CompiledState, grid: GridSpec, outRe: Float32Array, outIm: Float32Array | null): void {
+export function sampleStateOnGrid(
+  c: CompiledState,
+  grid: GridSpec,
+  outRe: Float32Array,
+  outIm: Float32Array | null,
+): void {
   checkGrid(grid);
   const n = grid.n;
   const total = n * n * n;
-  if (outRe.length < total) throw new OrbitalInputError('outRe', `needs ${total} elements, got ${outRe.length}`);
-  if (outIm === null && !c.isReal) throw new OrbitalInputError('outIm', 'the state is complex: an array for the imaginary part is required');
-  if (outIm !== null && outIm.length < total) throw new OrbitalInputError('outIm', `needs ${total} elements, got ${outIm.length}`);
+  if (outRe.length < total)
+    throw new OrbitalInputError('outRe', `needs ${total} elements, got ${outRe.length}`);
+  if (outIm === null && !c.isReal)
+    throw new OrbitalInputError(
+      'outIm',
+      'the state is complex: an array for the imaginary part is required',
+    );
+  if (outIm !== null && outIm.length < total)
+    throw new OrbitalInputError('outIm', `needs ${total} elements, got ${outIm.length}`);
 
   const step = (2 * grid.half) / (n - 1);
   const expN = new Float64Array(MAX_PRINCIPAL_QUANTUM_NUMBER + 1);

@@ -62,7 +62,13 @@ export function zonalFactor(plan: SolidHarmonicPlan, z: number, r2: number): num
 }
 
 /** The plan's solid harmonic at (x, y, z), r2 = x² + y² + z²: real S or complex-basis factor as planned. */
-export function solidHarmonicValue(plan: SolidHarmonicPlan, x: number, y: number, z: number, r2: number): number {
+export function solidHarmonicValue(
+  plan: SolidHarmonicPlan,
+  x: number,
+  y: number,
+  z: number,
+  r2: number,
+): number {
   const q = zonalFactor(plan, z, r2);
   if (plan.mAbs === 0) return q;
   // Re/Im of (x + iy)^|m| by repeated complex multiplication.

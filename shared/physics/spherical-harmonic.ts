@@ -11,7 +11,13 @@ import type { Complex } from './complex';
 import { normalisedLegendre } from './normalised-legendre';
 import { checkDirection } from './quantum-numbers';
 
-export function sphericalHarmonic(l: number, m: number, theta: number, phi: number, out: Complex = { re: 0, im: 0 }): Complex {
+export function sphericalHarmonic(
+  l: number,
+  m: number,
+  theta: number,
+  phi: number,
+  out: Complex = { re: 0, im: 0 },
+): Complex {
   const { l: ll, m: mm } = checkDirection(l, m, theta, phi);
   const mAbs = Math.abs(mm);
   const p = normalisedLegendre(ll, mAbs, Math.cos(theta), Math.sin(theta));

@@ -10,7 +10,12 @@ export interface Tolerance {
   scale?: number;
 }
 
-export function expectClose(value: number, expected: number, tol: Tolerance, input: unknown = ''): void {
+export function expectClose(
+  value: number,
+  expected: number,
+  tol: Tolerance,
+  input: unknown = '',
+): void {
   const rel = tol.rel ?? 0;
   const allowed = Math.max(rel * (tol.scale ?? Math.abs(expected)), tol.abs ?? 0);
   const diff = Math.abs(value - expected);

@@ -1,6 +1,11 @@
 // States: ψ at a test point (REFERENCE.md §6), normalisation, basis mixing, time phase, the grid sampler, hybrids.
 import { describe, expect, it } from 'vitest';
-import { compileState, evaluatePsi, type Complex, type OrbitalState } from '../../../shared/physics/orbital-state';
+import {
+  compileState,
+  evaluatePsi,
+  type Complex,
+  type OrbitalState,
+} from '../../../shared/physics/orbital-state';
 import { sampleStateOnGrid, suggestedExtent } from '../../../shared/physics/sample-state-on-grid';
 import { radialFunction } from '../../../shared/physics/radial-function';
 import { sphericalHarmonic } from '../../../shared/physics/spherical-harmonic';
@@ -13,8 +18,12 @@ import { cartesianToSpherical, gridIndex } from '../../../shared/physics/coordin
 import { gaussLegendre } from '../../../shared/physics/gauss-legendre';
 import { expectClose } from './close-to';
 
-const psiAt = (state: OrbitalState, x: number, y: number, z: number): Complex => evaluatePsi(compileState(state), x, y, z, { re: 0, im: 0 });
-const single = (n: number, l: number, m: number, basis: 'real' | 'complex'): OrbitalState => ({ Z: 1, terms: [{ n, l, m, basis }] });
+const psiAt = (state: OrbitalState, x: number, y: number, z: number): Complex =>
+  evaluatePsi(compileState(state), x, y, z, { re: 0, im: 0 });
+const single = (n: number, l: number, m: number, basis: 'real' | 'complex'): OrbitalState => ({
+  Z: 1,
+  terms: [{ n, l, m, basis }],
+});
 
 describe('evaluatePsi at (1, 2, 3) bohr (REFERENCE.md §6, computed there by two routes)', () => {
   it('when a real orbital is asked for, then ψ matches the table', () => {
@@ -81,9 +90,14 @@ describe('compileState', () => {
       ],
     });
     const psi = evaluatePsi(c, 0.5, -0.2, 1.1, { re: 0, im: 0 });
-    const expected = (3 * psiAt(single(1, 0, 0, 'real'), 0.5, -0.2, 1.1).re + 4 * psiAt(single(2, 1, 0, 'real'), 0.5, -0.2, 1.1).re) / 5;
+    const expected =
+      (3 * psiAt(single(1, 0, 0, 'real'), 0.5, -0.2, 1.1).re +
+        4 * psiAt(single(2, 1, 0, 'real'), 0.5, -0.2, 1.1).re) /
+      5;
     expectClose(psi.re, expected, { rel: 1e-14 });
-    expect(c.terms.reduce((s, t) => s + t.coefficient.re ** 2 + t.coefficient.im ** 2, 0)).toBeCloseTo(1, 14);
+    expect(
+      c.terms.reduce((s, t) => s + t.coefficient.re ** 2 + t.coefficient.im ** 2, 0),
+    ).toBeCloseTo(1, 14);
   });
 
   it('when real and complex terms of the same n, l are mixed, then they are combined before normalising (not treated as orthogonal)', () => {
@@ -161,10 +175,16 @@ describe('compileState', () => {
   });
 
   it('when a real state is given negative or complex global weights, then isReal holds and the signs given are kept', () => {
-    const neg = compileState({ Z: 1, terms: [{ n: 2, l: 1, m: 0, basis: 'real', weight: { re: -1, im: 0 } }] });
+    const neg = compileState({
+      Z: 1,
+      terms: [{ n: 2, l: 1, m: 0, basis: 'real', weight: { re: -1, im: 0 } }],
+    });
     expect(neg.isReal).toBe(true);
     expect(neg.realTerms[0].coefficient).toEqual({ re: -1, im: 0 });
-    const rotated = compileState({ Z: 1, terms: [{ n: 2, l: 1, m: 0, basis: 'real', weight: { re: 0, im: 2 } }] });
+    const rotated = compileState({
+      Z: 1,
+      terms: [{ n: 2, l: 1, m: 0, basis: 'real', weight: { re: 0, im: 2 } }],
+    });
     expect(rotated.isReal).toBe(true);
     expectClose(Math.abs(rotated.realTerms[0].coefficient.re), 1, { rel: 1e-15 });
     // Complex Y_1^{±1} combined as (Y^{-1} − Y^{1})/√2 is p_x: real.
@@ -181,16 +201,29 @@ describe('compileState', () => {
 
   it('when the ¹H reduced mass is asked for, then ψ(r) = μ^{3/2} ψ_∞(μr) (lengths in a_μ, REFERENCE.md §1)', () => {
     const mu = massRatioForNucleus(NUCLEAR_MASSES.hydrogen1);
-    const c = compileState({ Z: 1, reducedMass: true, terms: [{ n: 2, l: 1, m: 0, basis: 'real' }] });
+    const c = compileState({
+      Z: 1,
+      reducedMass: true,
+      terms: [{ n: 2, l: 1, m: 0, basis: 'real' }],
+    });
     expectClose(c.muRatio, mu, { rel: 1e-15 });
     const psi = evaluatePsi(c, 1, 2, 3, { re: 0, im: 0 }).re;
-    expectClose(psi, mu ** 1.5 * psiAt(single(2, 1, 0, 'real'), mu, 2 * mu, 3 * mu).re, { rel: 1e-14 });
-    const d = compileState({ Z: 1, reducedMass: { nuclearMassInElectronMasses: NUCLEAR_MASSES.hydrogen2 }, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] });
+    expectClose(psi, mu ** 1.5 * psiAt(single(2, 1, 0, 'real'), mu, 2 * mu, 3 * mu).re, {
+      rel: 1e-14,
+    });
+    const d = compileState({
+      Z: 1,
+      reducedMass: { nuclearMassInElectronMasses: NUCLEAR_MASSES.hydrogen2 },
+      terms: [{ n: 1, l: 0, m: 0, basis: 'real' }],
+    });
     expectClose(d.muRatio, 3670.482967655 / 3671.482967655, { rel: 1e-15 });
   });
 
   it('when the input is bad, then OrbitalInputError names the field and the reason', () => {
-    const base = (patch: Partial<OrbitalState['terms'][0]>): OrbitalState => ({ Z: 1, terms: [{ n: 2, l: 1, m: 0, basis: 'real', ...patch }] });
+    const base = (patch: Partial<OrbitalState['terms'][0]>): OrbitalState => ({
+      Z: 1,
+      terms: [{ n: 2, l: 1, m: 0, basis: 'real', ...patch }],
+    });
     const cases: [OrbitalState, string, RegExp][] = [
       [base({ n: 0 }), 'terms[0].n', /at least 1/],
       [base({ l: 2 }), 'terms[0].l', /less than n/],
@@ -203,8 +236,16 @@ describe('compileState', () => {
       [{ Z: 93, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] }, 'Z', /between 1 and 92/],
       [{ Z: 1.5, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] }, 'Z', /integer/],
       [{ Z: 1, terms: [] }, 'terms', /non-empty/],
-      [{ Z: 3, reducedMass: true, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] }, 'reducedMass', /nuclearMassInElectronMasses/],
-      [{ Z: 1, time: Number.POSITIVE_INFINITY, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] }, 'time', /finite/],
+      [
+        { Z: 3, reducedMass: true, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] },
+        'reducedMass',
+        /nuclearMassInElectronMasses/,
+      ],
+      [
+        { Z: 1, time: Number.POSITIVE_INFINITY, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] },
+        'time',
+        /finite/,
+      ],
     ];
     for (const [state, field, reason] of cases) {
       let caught: unknown = null;
@@ -258,8 +299,12 @@ describe('sampleStateOnGrid and suggestedExtent', () => {
 
   it('when the state is complex and no imaginary array is given, then the sampler refuses', () => {
     const c = compileState(single(2, 1, 1, 'complex'));
-    expect(() => sampleStateOnGrid(c, { n: 4, half: 5 }, new Float32Array(64), null)).toThrow(/outIm/);
-    expect(() => sampleStateOnGrid(c, { n: 1, half: 5 }, new Float32Array(64), new Float32Array(64))).toThrow(/grid.n/);
+    expect(() => sampleStateOnGrid(c, { n: 4, half: 5 }, new Float32Array(64), null)).toThrow(
+      /outIm/,
+    );
+    expect(() =>
+      sampleStateOnGrid(c, { n: 1, half: 5 }, new Float32Array(64), new Float32Array(64)),
+    ).toThrow(/grid.n/);
   });
 
   it('when the extent is suggested, then it is ≥ r_0.999 of every term and rounded up to two digits', () => {
@@ -275,10 +320,9 @@ describe('sampleStateOnGrid and suggestedExtent', () => {
     expect(extent).toBeGreaterThanOrEqual(r3d);
     expect(extent).toBeLessThan(r3d * 1.1);
     expect(Number(extent.toPrecision(2))).toBe(extent);
-    expect(suggestedExtent(compileState({ Z: 2, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] }))).toBeCloseTo(
-      Math.ceil(radiusEnclosingProbability(1, 0, 0.999, 2) * 10) / 10,
-      12,
-    );
+    expect(
+      suggestedExtent(compileState({ Z: 2, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] })),
+    ).toBeCloseTo(Math.ceil(radiusEnclosingProbability(1, 0, 0.999, 2) * 10) / 10, 12);
   });
 });
 
@@ -301,7 +345,8 @@ describe('hybrid orbitals (Pauling 1931, from memory)', () => {
 
   it('when the first sp³ hybrid is evaluated, then it is largest along (1,1,1) among the cube diagonals', () => {
     const c = compileState({ Z: 1, terms: sp3Hybrids(2)[0] });
-    const at = (x: number, y: number, z: number): number => evaluatePsi(c, x, y, z, { re: 0, im: 0 }).re;
+    const at = (x: number, y: number, z: number): number =>
+      evaluatePsi(c, x, y, z, { re: 0, im: 0 }).re;
     const d = 1 / Math.sqrt(3); // r = 1 bohr, inside the 2s node at r = 2 where R_20 > 0
     expect(at(d, d, d)).toBeGreaterThan(Math.abs(at(d, -d, -d)));
     expect(at(d, d, d)).toBeGreaterThan(Math.abs(at(-d, -d, -d)));

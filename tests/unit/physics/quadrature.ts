@@ -1,7 +1,13 @@
 // Composite Gauss–Legendre quadrature for test integrals over [a, b] (panels of equal width).
 import { gaussLegendre } from '../../../shared/physics/gauss-legendre';
 
-export function integrate(f: (x: number) => number, a: number, b: number, panels = 400, order = 20): number {
+export function integrate(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  panels = 400,
+  order = 20,
+): number {
   const rule = gaussLegendre(order);
   const h = (b - a) / panels;
   let sum = 0;

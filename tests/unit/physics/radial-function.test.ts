@@ -42,7 +42,12 @@ describe('radialFunction', () => {
       for (const Z of [1, 3]) {
         for (const r of [0, 0.01, 0.3, 1, 2.5, 7, 15, 31]) {
           const expected = Z ** 1.5 * form(Z * r);
-          expectClose(radialFunction(n, l, r, Z), expected, { rel: 1e-13, scale: 2 * Z ** 1.5 }, { n, l, Z, r });
+          expectClose(
+            radialFunction(n, l, r, Z),
+            expected,
+            { rel: 1e-13, scale: 2 * Z ** 1.5 },
+            { n, l, Z, r },
+          );
         }
       }
     }
@@ -62,7 +67,9 @@ describe('radialFunction', () => {
 
   it('when the ¹H reduced mass is used, then R scales as μ^{3/2} R(μr) (lengths in a_μ, REFERENCE.md §1)', () => {
     const mu = massRatioForNucleus(NUCLEAR_MASSES.hydrogen1);
-    expectClose(radialFunction(2, 1, 3, 1, mu), mu ** 1.5 * closedForms['2,1'](mu * 3), { rel: 1e-14 });
+    expectClose(radialFunction(2, 1, 3, 1, mu), mu ** 1.5 * closedForms['2,1'](mu * 3), {
+      rel: 1e-14,
+    });
   });
 
   it('when n is large, then the signs follow R > 0 near 0 and (−1)^(n−l−1) far out (REFERENCE.md §4)', () => {
@@ -86,17 +93,30 @@ describe('radialFunction', () => {
       [30, 15],
       [30, 29],
     ]) {
-      const norm = integrate((r) => (radialFunction(n, l, r) * r) ** 2, 0, 6 * n * n + 60, 1500, 24);
+      const norm = integrate(
+        (r) => (radialFunction(n, l, r) * r) ** 2,
+        0,
+        6 * n * n + 60,
+        1500,
+        24,
+      );
       expectClose(norm, 1, { rel: 1e-12 }, { n, l });
     }
   });
 
   it('when orthogonality is integrated, then ∫R_nl R_n′l r² dr = δ and the unequal-l overlaps are 32/(27√6) and −√3/2 (REFERENCE.md §7)', () => {
     const overlap = (n1: number, l1: number, n2: number, l2: number): number =>
-      integrate((r) => radialFunction(n1, l1, r) * radialFunction(n2, l2, r) * r * r, 0, 200, 800, 20);
+      integrate(
+        (r) => radialFunction(n1, l1, r) * radialFunction(n2, l2, r) * r * r,
+        0,
+        200,
+        800,
+        20,
+      );
     for (let l = 0; l <= 3; l++) {
       for (let n1 = l + 1; n1 <= 5; n1++) {
-        for (let n2 = n1; n2 <= 5; n2++) expectClose(overlap(n1, l, n2, l), n1 === n2 ? 1 : 0, { abs: 1e-13 }, { n1, n2, l });
+        for (let n2 = n1; n2 <= 5; n2++)
+          expectClose(overlap(n1, l, n2, l), n1 === n2 ? 1 : 0, { abs: 1e-13 }, { n1, n2, l });
       }
     }
     expectClose(overlap(1, 0, 2, 1), 32 / (27 * Math.sqrt(6)), { rel: 1e-13 });

@@ -4,8 +4,14 @@ import { describe, expect, it } from 'vitest';
 import { radialFunction } from '../../../shared/physics/radial-function';
 import { radialExpectationValues } from '../../../shared/physics/radial-expectation';
 import { radialNodes } from '../../../shared/physics/radial-nodes';
-import { mostProbableRadius, radialDistributionMaxima } from '../../../shared/physics/most-probable-radius';
-import { cumulativeRadialProbability, radialDistribution } from '../../../shared/physics/radial-probability';
+import {
+  mostProbableRadius,
+  radialDistributionMaxima,
+} from '../../../shared/physics/most-probable-radius';
+import {
+  cumulativeRadialProbability,
+  radialDistribution,
+} from '../../../shared/physics/radial-probability';
 import { radiusEnclosingProbability } from '../../../shared/physics/radius-enclosing-probability';
 import { expectClose } from './close-to';
 import { integrate } from './quadrature';
@@ -25,7 +31,11 @@ describe('radialExpectationValues', () => {
     for (const [n, l, want] of table) {
       const e = radialExpectationValues(n, l);
       const got = [e.r, e.r2, e.r3, e.invR, e.invR2, e.invR3];
-      got.forEach((v, i) => (want[i] === Infinity ? expect(v).toBe(Infinity) : expectClose(v, want[i], { rel: 1e-15 }, { n, l, i })));
+      got.forEach((v, i) =>
+        want[i] === Infinity
+          ? expect(v).toBe(Infinity)
+          : expectClose(v, want[i], { rel: 1e-15 }, { n, l, i }),
+      );
     }
   });
 
@@ -34,7 +44,8 @@ describe('radialExpectationValues', () => {
       for (let n = 1; n <= 5; n++) {
         for (let l = 0; l < n; l++) {
           const e = radialExpectationValues(n, l, Z);
-          const moment = (k: number): number => integrate((r) => radialFunction(n, l, r, Z) ** 2 * r ** (2 + k), 0, 400 / Z, 1200, 20);
+          const moment = (k: number): number =>
+            integrate((r) => radialFunction(n, l, r, Z) ** 2 * r ** (2 + k), 0, 400 / Z, 1200, 20);
           const pairs: [number, number][] = [
             [1, e.r],
             [2, e.r2],
@@ -59,7 +70,10 @@ describe('radialExpectationValues', () => {
       const e = radialExpectationValues(n, l);
       const moments: Record<number, number> = { [-1]: e.invR, 0: 1, 1: e.r, 2: e.r2, 3: e.r3 };
       for (let s = 1; s <= 3; s++) {
-        const lhs = ((s + 1) / n ** 2) * moments[s] - (2 * s + 1) * moments[s - 1] + (s / 4) * ((2 * l + 1) ** 2 - s * s) * moments[s - 2];
+        const lhs =
+          ((s + 1) / n ** 2) * moments[s] -
+          (2 * s + 1) * moments[s - 1] +
+          (s / 4) * ((2 * l + 1) ** 2 - s * s) * moments[s - 2];
         expectClose(lhs, 0, { abs: 1e-12 * moments[s] }, { n, l, s });
       }
     }
@@ -111,14 +125,19 @@ describe('mostProbableRadius', () => {
     expectClose(mostProbableRadius(3, 0), 13.07403282802196, { rel: 1e-13 });
     expectClose(mostProbableRadius(4, 0), 24.61809203478083, { rel: 1e-13 });
     const maxima4s = radialDistributionMaxima(4, 0);
-    [0.732343789082524, 4, 10.64956417613665, 24.61809203478083].forEach((v, i) => expectClose(maxima4s[i], v, { rel: 1e-13 }, i));
+    [0.732343789082524, 4, 10.64956417613665, 24.61809203478083].forEach((v, i) =>
+      expectClose(maxima4s[i], v, { rel: 1e-13 }, i),
+    );
     const maxima3s = radialDistributionMaxima(3, 0);
-    [0.740037080420508, 4.185930091557534, 13.07403282802196].forEach((v, i) => expectClose(maxima3s[i], v, { rel: 1e-13 }, i));
+    [0.740037080420508, 4.185930091557534, 13.07403282802196].forEach((v, i) =>
+      expectClose(maxima3s[i], v, { rel: 1e-13 }, i),
+    );
     expectClose(radialDistributionMaxima(2, 0)[0], 3 - Math.sqrt(5), { rel: 1e-13 });
   });
 
   it('when l = n − 1, then r_mp = n²/Z up to n = 30 (textbook; REFERENCE.md §8)', () => {
-    for (const n of [5, 12, 30]) expectClose(mostProbableRadius(n, n - 1, 3), (n * n) / 3, { rel: 1e-13 }, n);
+    for (const n of [5, 12, 30])
+      expectClose(mostProbableRadius(n, n - 1, 3), (n * n) / 3, { rel: 1e-13 }, n);
   });
 
   it('when a dense grid is searched, then no point beats the reported global maximum', () => {
@@ -128,7 +147,8 @@ describe('mostProbableRadius', () => {
       [30, 2],
     ]) {
       const best = radialDistribution(n, l, mostProbableRadius(n, l));
-      for (let r = 0.01; r < 3 * n * n; r += 0.05) expect(radialDistribution(n, l, r)).toBeLessThanOrEqual(best * (1 + 1e-12));
+      for (let r = 0.01; r < 3 * n * n; r += 0.05)
+        expect(radialDistribution(n, l, r)).toBeLessThanOrEqual(best * (1 + 1e-12));
     }
   });
 });
@@ -145,7 +165,8 @@ describe('cumulativeRadialProbability and radiusEnclosingProbability', () => {
     }
     // Near the nucleus the closed form cancels; use the series P(3, y) = y³e^{-y}/3! · Σ y^k/(4·5…(3+k)) (DLMF 8.7.1), y = 2x.
     const y = 0.002;
-    const series = ((y ** 3 * Math.exp(-y)) / 6) * (1 + y / 4 + y ** 2 / 20 + y ** 3 / 120 + y ** 4 / 840);
+    const series =
+      ((y ** 3 * Math.exp(-y)) / 6) * (1 + y / 4 + y ** 2 / 20 + y ** 3 / 120 + y ** 4 / 840);
     expectClose(cumulativeRadialProbability(1, 0, 0.001), series, { rel: 1e-13 }, 0.001);
   });
 
@@ -177,7 +198,11 @@ describe('cumulativeRadialProbability and radiusEnclosingProbability', () => {
       expectClose(radiusEnclosingProbability(2, 1, p), r2p, { rel: 1e-12 }, { p, state: '2p' });
       expectClose(radiusEnclosingProbability(3, 2, p), r3d, { rel: 1e-12 }, { p, state: '3d' });
     }
-    expectClose(cumulativeRadialProbability(20, 4, radiusEnclosingProbability(20, 4, 0.999)), 0.999, { abs: 1e-13 });
+    expectClose(
+      cumulativeRadialProbability(20, 4, radiusEnclosingProbability(20, 4, 0.999)),
+      0.999,
+      { abs: 1e-13 },
+    );
   });
 
   it('when r is 0 or very large, then P is 0 or 1', () => {

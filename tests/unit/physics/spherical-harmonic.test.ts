@@ -16,7 +16,10 @@ const { sqrt, PI, sin, cos } = Math;
 const closed: Record<string, (t: number, p: number) => [number, number]> = {
   '0,0': () => [1 / (2 * sqrt(PI)), 0],
   '1,0': (t) => [0.5 * sqrt(3 / PI) * cos(t), 0],
-  '1,1': (t, p) => [-0.5 * sqrt(3 / (2 * PI)) * sin(t) * cos(p), -0.5 * sqrt(3 / (2 * PI)) * sin(t) * sin(p)],
+  '1,1': (t, p) => [
+    -0.5 * sqrt(3 / (2 * PI)) * sin(t) * cos(p),
+    -0.5 * sqrt(3 / (2 * PI)) * sin(t) * sin(p),
+  ],
   '2,0': (t) => [0.25 * sqrt(5 / PI) * (3 * cos(t) ** 2 - 1), 0],
   '2,1': (t, p) => {
     const a = -0.5 * sqrt(15 / (2 * PI)) * sin(t) * cos(t);
@@ -135,7 +138,10 @@ describe('sphericalHarmonic (complex, Condon–Shortley)', () => {
               const p = (2 * PI * j) / nPhi;
               const w = (rule.weights[i] * 2 * PI) / nPhi;
               if (basis === 'real') {
-                re += w * realSphericalHarmonic(fns[a][0], fns[a][1], t, p) * realSphericalHarmonic(fns[b][0], fns[b][1], t, p);
+                re +=
+                  w *
+                  realSphericalHarmonic(fns[a][0], fns[a][1], t, p) *
+                  realSphericalHarmonic(fns[b][0], fns[b][1], t, p);
               } else {
                 const ya = sphericalHarmonic(fns[a][0], fns[a][1], t, p);
                 const yb = sphericalHarmonic(fns[b][0], fns[b][1], t, p);
@@ -200,7 +206,12 @@ describe('real harmonics and real solid harmonics', () => {
         const x = sin(t) * cos(p);
         const yy = sin(t) * sin(p);
         const z = cos(t);
-        expectClose(realSolidHarmonic(l, m, 2 * x, 2 * yy, 2 * z), fromAngles * 2 ** l, { abs: 1e-13 * 2 ** l }, { l, m });
+        expectClose(
+          realSolidHarmonic(l, m, 2 * x, 2 * yy, 2 * z),
+          fromAngles * 2 ** l,
+          { abs: 1e-13 * 2 ** l },
+          { l, m },
+        );
       }
     }
   });
@@ -221,15 +232,23 @@ describe('real harmonics and real solid harmonics', () => {
 
 describe('orbitalLabel', () => {
   it('when real l ≤ 3, then the conventional labels of REFERENCE.md §5 come out, with structured parts', () => {
-    expect(orbitalLabel(3, 2, 0, 'real')).toEqual({ text: '3d_z²', parts: [{ t: '3d' }, { sub: 'z²' }] });
+    expect(orbitalLabel(3, 2, 0, 'real')).toEqual({
+      text: '3d_z²',
+      parts: [{ t: '3d' }, { sub: 'z²' }],
+    });
     expect(orbitalLabel(1, 0, 0, 'real')).toEqual({ text: '1s', parts: [{ t: '1s' }] });
     const texts = realTable.map(([, l, m]) => orbitalLabel(4, l, m, 'real').text);
-    expect(texts).toEqual(realTable.map(([label, l]) => (l === 0 ? '4s' : `4${'spdf'[l]}_${label.slice(2)}`)));
+    expect(texts).toEqual(
+      realTable.map(([label, l]) => (l === 0 ? '4s' : `4${'spdf'[l]}_${label.slice(2)}`)),
+    );
   });
 
   it('when l ≥ 4 or complex, then the subscript is the signed m', () => {
     expect(orbitalLabel(5, 4, 2, 'real').text).toBe('5g_m=+2');
-    expect(orbitalLabel(2, 1, -1, 'complex')).toEqual({ text: '2p_m=-1', parts: [{ t: '2p' }, { sub: 'm=-1' }] });
+    expect(orbitalLabel(2, 1, -1, 'complex')).toEqual({
+      text: '2p_m=-1',
+      parts: [{ t: '2p' }, { sub: 'm=-1' }],
+    });
     expect(orbitalLabel(30, 21, 0, 'real').text).toBe('30[l=21]_m=0');
   });
 });
@@ -241,7 +260,11 @@ describe('angularNodes', () => {
     expect(dz2.planes).toEqual([]);
     expectClose(dz2.cones[0].halfAngle, Math.acos(-1 / sqrt(3)), { rel: 1e-14 });
     expectClose(dz2.cones[1].halfAngle, Math.acos(1 / sqrt(3)), { rel: 1e-14 });
-    expect(angularNodes(1, 1, 'real')).toEqual({ count: 1, planes: [{ kind: 'plane', normal: [1, 0, 0] }], cones: [] });
+    expect(angularNodes(1, 1, 'real')).toEqual({
+      count: 1,
+      planes: [{ kind: 'plane', normal: [1, 0, 0] }],
+      cones: [],
+    });
     expect(angularNodes(1, 0, 'real').planes).toEqual([{ kind: 'plane', normal: [0, 0, 1] }]);
   });
 
