@@ -5,10 +5,13 @@
  */
 export class OrbitalInputError extends Error {
   override readonly name = 'OrbitalInputError';
+  /** The reason alone, without the field name in front (the message has both). */
+  readonly reason: string;
   constructor(
     readonly field: string,
-    message: string,
+    reason: string,
   ) {
-    super(`${field}: ${message}`);
+    super(`${field}: ${reason}`);
+    this.reason = reason;
   }
 }
