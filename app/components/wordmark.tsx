@@ -1,17 +1,17 @@
-// Lobewright's wordmark: two lobes meeting at a point, drawn inline, beside the name.
+// Lobewright's wordmark: two lobes of opposite phase meeting at the nucleus, beside the name.
 export function Wordmark() {
   return (
     <span className="flex items-center gap-2 text-lg font-semibold tracking-tight text-stone-900">
-      <svg aria-hidden="true" viewBox="0 0 24 24" className="size-6">
-        <ellipse cx="12" cy="6.5" rx="4.2" ry="5.5" className="fill-accent-600" />
-        <ellipse
-          cx="12"
-          cy="17.5"
-          rx="4.2"
-          ry="5.5"
-          className="fill-none stroke-accent-600"
-          strokeWidth="1.6"
-        />
+      <svg aria-hidden="true" viewBox="0 0 24 24" className="size-7">
+        <g transform="rotate(-32 12 12)">
+          <path d="M12 12C7.2 8.6 8 1.6 12 1.6S16.8 8.6 12 12Z" className="fill-accent-600" />
+          <path
+            d="M12 12C7.2 15.4 8 22.4 12 22.4S16.8 15.4 12 12Z"
+            className="fill-white stroke-accent-600"
+            strokeWidth="1.4"
+            strokeLinejoin="round"
+          />
+        </g>
       </svg>
       Lobewright
     </span>

@@ -41,15 +41,34 @@ interface Draft {
   values: Details;
 }
 
+const FIELD_NAMES: Record<keyof Details, string> = {
+  title: 'title',
+  number: 'number',
+  caption: 'caption',
+  altText: 'alt text',
+};
+
+function fieldList(fields: Partial<Details>): string {
+  const names = Object.keys(fields).map((key) => FIELD_NAMES[key as keyof Details]);
+  return names.length <= 1
+    ? (names[0] ?? '')
+    : `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
+}
+
 function StaleNotice({
   revision,
   savedBy,
+  theirChanges,
+  myChanges,
   busy,
   onLoadTheirs,
   onApplyMine,
 }: {
   revision: number;
   savedBy: string | null;
+  /** What the newer revision changed since the one this draft started from, when it is loaded. */
+  theirChanges: Partial<Details> | null;
+  myChanges: Partial<Details>;
   busy: boolean;
   onLoadTheirs: () => void;
   onApplyMine: () => void;
@@ -65,8 +84,12 @@ function StaleNotice({
           : `Someone saved revision ${revision} meanwhile.`}
       </p>
       <p>
-        Your changes are not saved yet. Load their revision and drop your changes, or save your
-        changes on top of theirs as a new revision.
+        {theirChanges && Object.keys(theirChanges).length > 0
+          ? `Revision ${revision} changed the ${fieldList(theirChanges)}. `
+          : ''}
+        Your change to the {fieldList(myChanges)} is not saved yet. Load revision {revision} and
+        drop your change, or save your change on top of it as a new revision (keeping everything
+        else from revision {revision}).
       </p>
       <div className="flex flex-wrap gap-2">
         <Button size="sm" onClick={onLoadTheirs} disabled={busy}>
@@ -93,6 +116,7 @@ export function FigureDetailsForm({ figure }: { figure: Figure }) {
   const active = draft && (dirty || draft.base === figure.revision) ? draft : null;
   const values = active?.values ?? detailsOf(figure);
   const base = active?.base ?? figure.revision;
+  const original = active?.original ?? detailsOf(figure);
   const latest = Math.max(figure.revision, currentRevisionFromConflict(update.error) ?? 0);
   const stale = dirty && latest > base;
   const errors = { ...apiFieldErrors(update.error), ...clientErrors };
@@ -145,6 +169,10 @@ export function FigureDetailsForm({ figure }: { figure: Figure }) {
         <StaleNotice
           revision={latest}
           savedBy={figure.revision === latest ? figure.updatedBy : null}
+          theirChanges={
+            figure.revision === latest ? changedFields(original, detailsOf(figure)) : null
+          }
+          myChanges={changedFields(original, values)}
           busy={update.isPending}
           onLoadTheirs={loadTheirs}
           onApplyMine={() => save(latest)}

@@ -1,6 +1,6 @@
 // Every saved revision of a figure, newest first, with who saved it, when and their note.
 // A revision can be opened to read what it held.
-import { Fragment, useState } from 'react';
+import { Fragment, useEffect, useRef, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { ErrorPanel, Loading } from '../../../components/ui/status';
 import { formatDateTime } from '../../../utils/format-date';
@@ -16,6 +16,16 @@ interface RevisionListProps {
 export function RevisionList({ figureId, currentRevision, approvedRevision }: RevisionListProps) {
   const revisions = useRevisions(figureId);
   const [open, setOpen] = useState<number | null>(null);
+
+  // The figure moved on (someone saved, or this page did): fetch the list again, once per revision.
+  const refetchedFor = useRef(currentRevision);
+  const { data, refetch } = revisions;
+  useEffect(() => {
+    if (!data || data.some((r) => r.revision === currentRevision)) return;
+    if (refetchedFor.current === currentRevision) return;
+    refetchedFor.current = currentRevision;
+    void refetch();
+  }, [currentRevision, data, refetch]);
 
   if (revisions.isPending) return <Loading label="Loading revisions…" />;
   if (revisions.isError)

@@ -4,6 +4,9 @@ import type { FigureSpec, SpecTerm } from '../../../../shared/spec/figure-spec';
 import { figureKindInfo } from './figure-kinds';
 import { lLetter, orbitalLabel } from './orbital-label';
 
+/** Negative numbers with a true minus sign, as in print. */
+const printed = (x: number) => (x < 0 ? `−${-x}` : String(x));
+
 export interface SpecLine {
   term: string;
   detail: string;
@@ -31,8 +34,10 @@ function termLabel(t: SpecTerm): string {
 function describeState(spec: FigureSpec): string {
   const { terms, time } = spec.state;
   const at = time > 0 ? ` at t = ${time} ħ/E_h` : '';
-  if (terms.length === 1)
-    return `${termLabel(terms[0])} (n = ${terms[0].n}, l = ${terms[0].l}, m = ${terms[0].m}), ${terms[0].basis} form${at}`;
+  if (terms.length === 1) {
+    const [t] = terms;
+    return `${termLabel(t)} (n = ${t.n}, l = ${t.l}, m = ${printed(t.m)}), ${t.basis} form${at}`;
+  }
   return `Superposition of ${terms.length} states: ${list(terms.map(termLabel))}${at}`;
 }
 
@@ -66,7 +71,7 @@ function describeKind(spec: FigureSpec): string {
       return `Surface enclosing ${percent(k.enclosed)} of the probability, grid of ${k.grid} points a side${outer}`;
     }
     case 'slice': {
-      const what = k.quantity === 'psi' ? 'signed wavefunction ψ' : 'probability density |ψ|²';
+      const what = k.quantity === 'psi' ? 'Signed wavefunction ψ' : 'Probability density |ψ|²';
       const contours =
         k.contours.mode === 'enclosed'
           ? k.contours.fractions.length
