@@ -4,7 +4,6 @@ import { RouterProvider } from 'react-router/dom';
 import { RequireUser } from './features/auth/components/require-user';
 import { AdminRoute } from './routes/admin';
 import { AppLayout } from './routes/app-layout';
-import { FigureRoute } from './routes/figure';
 import { NotFoundRoute } from './routes/not-found';
 import { ProjectFiguresRoute } from './routes/project-figures';
 import { ProjectLayout } from './routes/project-layout';
@@ -40,7 +39,11 @@ const router = createBrowserRouter([
               { path: 'settings', element: <ProjectSettingsRoute /> },
             ],
           },
-          { path: '/figures/:figureId', element: <FigureRoute /> },
+          {
+            path: '/figures/:figureId',
+            // Its own chunk: the figure page will carry the 3D composer (three.js) with it.
+            lazy: () => import('./routes/figure').then((m) => ({ Component: m.FigureRoute })),
+          },
           { path: '/admin', element: <AdminRoute /> },
           { path: '*', element: <NotFoundRoute /> },
         ],

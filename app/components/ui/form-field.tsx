@@ -7,6 +7,7 @@ import {
   type TextareaHTMLAttributes,
 } from 'react';
 import { cn } from '../../utils/cn';
+import { sentence } from '../../utils/sentence';
 
 const controlClasses = (invalid: boolean) =>
   cn(
@@ -41,7 +42,7 @@ function FieldShell({ label, hint, error, className, children }: FieldShellProps
       )}
       {error && (
         <p id={errorId} className="text-sm text-red-700">
-          {error}
+          {sentence(error)}
         </p>
       )}
     </div>

@@ -1,7 +1,9 @@
 // What a page shows while data loads or after it failed: a polite status and an alert with a retry.
 import type { ReactNode } from 'react';
+import { Link } from 'react-router';
 import { ApiError } from '../../lib/api-client';
-import { Button } from './button';
+import { sentence } from '../../utils/sentence';
+import { Button, buttonClasses } from './button';
 
 export function Loading({ label = 'Loading…' }: { label?: string }) {
   return (
@@ -38,18 +40,26 @@ export function ErrorPanel({
   children?: ReactNode;
 }) {
   const { title, message } = describe(error);
+  const clientError = error instanceof ApiError && error.status >= 400 && error.status < 500;
   return (
     <div
       role="alert"
       className="space-y-3 rounded-lg border border-red-200 bg-red-50 p-4 text-sm text-red-900"
     >
       <p className="font-semibold">{title}</p>
-      <p>{message}</p>
+      <p>{sentence(message)}</p>
       {children}
-      {onRetry && (
-        <Button size="sm" onClick={onRetry}>
-          Try again
-        </Button>
+      {/* Asking again cannot help when the server said no (4xx); going back to the start can. */}
+      {clientError ? (
+        <Link to="/" className={buttonClasses('secondary', 'sm')}>
+          Go to your projects
+        </Link>
+      ) : (
+        onRetry && (
+          <Button size="sm" onClick={onRetry}>
+            Try again
+          </Button>
+        )
       )}
     </div>
   );
@@ -63,7 +73,7 @@ export function FormAlert({ message }: { message: string | null }) {
       role="alert"
       className="rounded-md border border-red-200 bg-red-50 px-3 py-2 text-sm text-red-800"
     >
-      {message}
+      {sentence(message)}
     </p>
   );
 }

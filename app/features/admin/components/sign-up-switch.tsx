@@ -18,7 +18,7 @@ export function SignUpSwitch({
     <div className="space-y-3">
       <Switch
         label="Anyone may create an account"
-        hint="When off, only people you add can sign in; the sign-in page says so."
+        hint="When off, the sign-up page is closed and no new accounts can be created there."
         checked={pending ?? settings.signupEnabled}
         disabled={update.isPending}
         onChange={(signupEnabled) =>
