@@ -57,7 +57,7 @@ export function physicsToThree(
 ): Vec3 {
   out.x = x;
   out.y = z;
-  out.z = -y;
+  out.z = 0 - y; // 0 − y, not −y: no negative zero in the output
   return out;
 }
 
@@ -68,7 +68,7 @@ export function threeToPhysics(
   out: Vec3 = { x: 0, y: 0, z: 0 },
 ): Vec3 {
   out.x = x;
-  out.y = -z;
+  out.y = 0 - z;
   out.z = y;
   return out;
 }

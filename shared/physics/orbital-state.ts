@@ -78,6 +78,8 @@ export interface CompiledRealTerm {
   /** Normalisation times a^l, so that R_nl(r)/r^l = radialScale e^{−ρ/2} L(ρ). */
   readonly radialScale: number;
   readonly harmonic: SolidHarmonicPlan;
+  /** True when the previous real term has the same n and l, so its radial factor can be reused. */
+  readonly sameRadialAsPrevious: boolean;
 }
 
 export interface CompiledState {
@@ -135,6 +137,7 @@ function compileRealTerm(
   coefficient: Complex,
   zEff: number,
   distinctN: number[],
+  previous: { n: number; l: number } | undefined,
 ): CompiledRealTerm {
   const a = (2 * zEff) / n;
   return {
@@ -148,6 +151,7 @@ function compileRealTerm(
     a,
     radialScale: Math.exp(radialLogNormalisation(n, l, zEff) + l * Math.log(a)),
     harmonic: solidHarmonicPlan(l, m, true),
+    sameRadialAsPrevious: previous !== undefined && previous.n === n && previous.l === l,
   };
 }
 
@@ -267,9 +271,18 @@ export function compileState(state: OrbitalState): CompiledState {
       : { ...c };
 
   const distinctN = [...new Set(real.map((r) => r.n))].sort((p, q) => p - q);
-  const realTerms = real.map((r) => {
+  // real is grouped by (n, l), so terms sharing a radial factor are adjacent.
+  const realTerms = real.map((r, i) => {
     const c = rotate(r.c);
-    return compileRealTerm(r.n, r.l, r.m, isReal ? { re: c.re, im: 0 } : c, zEff, distinctN);
+    return compileRealTerm(
+      r.n,
+      r.l,
+      r.m,
+      isReal ? { re: c.re, im: 0 } : c,
+      zEff,
+      distinctN,
+      real[i - 1],
+    );
   });
   const terms = kept.map((e) => ({ n: e.n, l: e.l, m: e.m, coefficient: rotate(e.c) }));
   return {
@@ -302,11 +315,15 @@ export function accumulateTerms(
   let re = 0;
   let im = 0;
   const terms = c.realTerms;
+  let radial = 0;
   for (let t = 0; t < terms.length; t++) {
     const term = terms[t];
-    const lag = assocLaguerre(term.degree, term.alpha, term.a * r);
-    const q0 = solidHarmonicValue(term.harmonic, x, y, z, r2);
-    const value = term.radialScale * expN[term.nIndex] * lag * q0;
+    if (!term.sameRadialAsPrevious) {
+      radial =
+        term.radialScale * expN[term.nIndex] * assocLaguerre(term.degree, term.alpha, term.a * r);
+    }
+    const angular = solidHarmonicValue(term.harmonic, x, y, z, r2);
+    const value = radial * angular;
     re += term.coefficient.re * value;
     im += term.coefficient.im * value;
   }

@@ -82,6 +82,12 @@ describe('spectral lines (REFERENCE.md §3, CODATA 2022 values)', () => {
     expectClose(spectralLine(3, 2).energyHartree, 5 / 72, { rel: 1e-15 });
   });
 
+  it('when deuterium replaces ¹H, then Hα moves to the blue by about 0.179 nm (isotope shift; textbook value from memory)', () => {
+    const muD = massRatioForNucleus(NUCLEAR_MASSES.hydrogen2);
+    const shift = spectralLine(3, 2, 1, muH).airNm! - spectralLine(3, 2, 1, muD).airNm!;
+    expectClose(shift, 0.179, { rel: 0.01 });
+  });
+
   it('when He⁺ (Z = 2), then wavelengths shrink by Z² (Rydberg formula)', () => {
     expectClose(
       spectralLine(4, 3, 2).vacuumNm,
