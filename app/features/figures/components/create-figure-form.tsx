@@ -12,7 +12,8 @@ import { figureKindNames, MAX_N } from '../../../../shared/spec/figure-spec';
 import { cn } from '../../../utils/cn';
 import { useCreateFigure } from '../api/create-figure';
 import { figureKindInfo, type FigureKindName } from '../utils/figure-kinds';
-import { lLetter, orbitalLabelParts, signed } from '../utils/orbital-label';
+import { angularMomentumLetter, angularSubscript } from '../../../../shared/physics/orbital-labels';
+import { signedNumber } from '../utils/signed-number';
 import { buildQuickSpec, clampQuickState, range, type QuickState } from '../utils/quick-spec';
 import { OrbitalLabel } from './orbital-label';
 
@@ -60,11 +61,11 @@ function KindPicker({
   );
 }
 
-function mOptionLabel(n: number, l: number, m: number): string {
-  const { subscript } = orbitalLabelParts(n, l, m);
-  return subscript && !subscript.startsWith('m=')
-    ? `${signed(m)}  (${lLetter(l)}_${subscript})`
-    : signed(m);
+/** "−2 (f_xyz)" for the named real orbitals, plain "+5" beyond f. */
+function mOptionLabel(l: number, m: number): string {
+  const subscript = l <= 3 ? angularSubscript(l, m, 'real') : null;
+  const value = signedNumber(m, { plus: true });
+  return subscript ? `${value}  (${angularMomentumLetter(l)}_${subscript})` : value;
 }
 
 function StatePicker({
@@ -97,7 +98,7 @@ function StatePicker({
         >
           {range(0, state.n - 1).map((l) => (
             <option key={l} value={l}>
-              {l} ({lLetter(l)})
+              {l} ({angularMomentumLetter(l)})
             </option>
           ))}
         </SelectField>
@@ -109,7 +110,7 @@ function StatePicker({
         >
           {range(-state.l, state.l).map((m) => (
             <option key={m} value={m}>
-              {mOptionLabel(state.n, state.l, m)}
+              {mOptionLabel(state.l, m)}
             </option>
           ))}
         </SelectField>

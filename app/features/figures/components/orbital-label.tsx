@@ -1,5 +1,6 @@
-// An orbital's name set as in print: 3d with z² as a subscript.
-import { orbitalLabelParts } from '../utils/orbital-label';
+// An orbital's conventional name set as in print (3d with z² as a subscript), from the labels
+// that shared/physics defines.
+import { orbitalLabel } from '../../../../shared/physics/orbital-labels';
 
 interface OrbitalLabelProps {
   n: number;
@@ -9,11 +10,12 @@ interface OrbitalLabelProps {
 }
 
 export function OrbitalLabel({ n, l, m, basis = 'real' }: OrbitalLabelProps) {
-  const { shell, subscript } = orbitalLabelParts(n, l, m, basis);
+  const { parts } = orbitalLabel(n, l, m, basis);
   return (
     <span className="whitespace-nowrap">
-      {shell}
-      {subscript && <sub>{subscript}</sub>}
+      {parts.map((part, i) =>
+        'sub' in part ? <sub key={i}>{part.sub}</sub> : <span key={i}>{part.t}</span>,
+      )}
     </span>
   );
 }

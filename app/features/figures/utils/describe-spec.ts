@@ -2,10 +2,8 @@
 // only; unset look and print settings are said to come from the house style.
 import type { FigureSpec, SpecTerm } from '../../../../shared/spec/figure-spec';
 import { figureKindInfo } from './figure-kinds';
-import { lLetter, orbitalLabel } from './orbital-label';
-
-/** Negative numbers with a true minus sign, as in print. */
-const printed = (x: number) => (x < 0 ? `−${-x}` : String(x));
+import { angularMomentumLetter, orbitalLabel } from '../../../../shared/physics/orbital-labels';
+import { signedNumber } from './signed-number';
 
 export interface SpecLine {
   term: string;
@@ -28,7 +26,7 @@ const RADIAL_QUANTITIES = {
 } as const;
 
 function termLabel(t: SpecTerm): string {
-  return orbitalLabel(t.n, t.l, t.m, t.basis);
+  return orbitalLabel(t.n, t.l, t.m, t.basis).text;
 }
 
 function describeState(spec: FigureSpec): string {
@@ -36,7 +34,7 @@ function describeState(spec: FigureSpec): string {
   const at = time > 0 ? ` at t = ${time} ħ/E_h` : '';
   if (terms.length === 1) {
     const [t] = terms;
-    return `${termLabel(t)} (n = ${t.n}, l = ${t.l}, m = ${printed(t.m)}), ${t.basis} form${at}`;
+    return `${termLabel(t)} (n = ${t.n}, l = ${t.l}, m = ${signedNumber(t.m)}), ${t.basis} form${at}`;
   }
   return `Superposition of ${terms.length} states: ${list(terms.map(termLabel))}${at}`;
 }
@@ -81,7 +79,11 @@ function describeKind(spec: FigureSpec): string {
       return `${what} in the ${planeName(k.plane)}, ${contours}, ${k.resolution} × ${k.resolution} samples`;
     }
     case 'radial':
-      return list(k.curves.map((c) => `${RADIAL_QUANTITIES[c.quantity]} of ${c.n}${lLetter(c.l)}`));
+      return list(
+        k.curves.map(
+          (c) => `${RADIAL_QUANTITIES[c.quantity]} of ${c.n}${angularMomentumLetter(c.l)}`,
+        ),
+      );
     case 'cloud':
       return `${k.points.toLocaleString('en-GB')} points, random seed ${k.seed}`;
     case 'angular':
