@@ -30,11 +30,8 @@ describe('coordinates', () => {
     const X = physicsToThree(1, 0, 0);
     const Y = physicsToThree(0, 1, 0);
     const Z = physicsToThree(0, 0, 1);
-    expect([X.y * Y.z - X.z * Y.y, X.z * Y.x - X.x * Y.z, X.x * Y.y - X.y * Y.x]).toEqual([
-      Z.x,
-      Z.y,
-      Z.z,
-    ]);
+    const cross = [X.y * Y.z - X.z * Y.y, X.z * Y.x - X.x * Y.z, X.x * Y.y - X.y * Y.x];
+    expect(cross.map((v) => v + 0)).toEqual([Z.x, Z.y, Z.z]);
   });
 
   it('when indexing a grid, then x runs fastest', () => {
