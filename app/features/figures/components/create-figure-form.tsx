@@ -8,13 +8,20 @@ import { FormAlert } from '../../../components/ui/status';
 import { useValidatedSubmit } from '../../../hooks/use-validated-submit';
 import { formErrorMessage } from '../../../lib/form-errors';
 import { createFigureBody, type Figure } from '../../../../shared/api/schemas';
-import { figureKindNames, MAX_N } from '../../../../shared/spec/figure-spec';
+import { figureKindNames } from '../../../../shared/spec/figure-spec';
 import { cn } from '../../../utils/cn';
 import { useCreateFigure } from '../api/create-figure';
 import { figureKindInfo, type FigureKindName } from '../utils/figure-kinds';
 import { angularMomentumLetter, angularSubscript } from '../../../../shared/physics/orbital-labels';
 import { signedNumber } from '../utils/signed-number';
-import { buildQuickSpec, clampQuickState, range, type QuickState } from '../utils/quick-spec';
+import {
+  buildQuickSpec,
+  clampQuickState,
+  lChoices,
+  mChoices,
+  nChoices,
+  type QuickState,
+} from '../utils/quick-spec';
 import { OrbitalLabel } from './orbital-label';
 
 const FIELDS = ['title', 'number'] as const;
@@ -84,7 +91,7 @@ function StatePicker({
       </legend>
       <div className="grid grid-cols-3 gap-3">
         <SelectField label="n (shell)" value={state.n} onChange={set('n')}>
-          {range(1, MAX_N).map((n) => (
+          {nChoices().map((n) => (
             <option key={n} value={n}>
               {n}
             </option>
@@ -96,7 +103,7 @@ function StatePicker({
           onChange={set('l')}
           hint={`0 to ${state.n - 1}`}
         >
-          {range(0, state.n - 1).map((l) => (
+          {lChoices(state.n).map((l) => (
             <option key={l} value={l}>
               {l} ({angularMomentumLetter(l)})
             </option>
@@ -108,7 +115,7 @@ function StatePicker({
           onChange={set('m')}
           hint={state.l === 0 ? 'only 0 for s' : `−${state.l} to +${state.l}`}
         >
-          {range(-state.l, state.l).map((m) => (
+          {mChoices(state.l).map((m) => (
             <option key={m} value={m}>
               {mOptionLabel(state.l, m)}
             </option>

@@ -53,6 +53,11 @@ export function clampQuickState({ n, l, m }: QuickState): QuickState {
   return { n: nn, l: ll, m: mm };
 }
 
-export function range(from: number, to: number): number[] {
+function range(from: number, to: number): number[] {
   return Array.from({ length: to - from + 1 }, (_, i) => from + i);
 }
+
+/** The choices the pickers offer: n = 1…MAX_N, l = 0…n−1, m = −l…+l; nothing else can be picked. */
+export const nChoices = (): number[] => range(1, MAX_N);
+export const lChoices = (n: number): number[] => range(0, n - 1);
+export const mChoices = (l: number): number[] => range(-l, l);
