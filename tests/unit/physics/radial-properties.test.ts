@@ -80,6 +80,26 @@ describe('radialExpectationValues', () => {
   });
 });
 
+describe('virial theorem (REFERENCE.md §7, textbook)', () => {
+  it('when ⟨V⟩ = −Z⟨1/r⟩ is formed, then it equals 2E_n = −Z²/n² for every (n, l, Z) tried', () => {
+    for (const [n, l, Z] of [
+      [1, 0, 1],
+      [2, 1, 1],
+      [3, 2, 1],
+      [4, 1, 2],
+      [4, 3, 3],
+      [30, 12, 92],
+    ]) {
+      expectClose(
+        -Z * radialExpectationValues(n, l, Z).invR,
+        -(Z * Z) / (n * n),
+        { rel: 1e-15 },
+        { n, l, Z },
+      );
+    }
+  });
+});
+
 describe('radialNodes', () => {
   it('when n ≤ 5, then the nodes match the closed forms of REFERENCE.md §8 to 1e-10 bohr', () => {
     const c = (k: number): number => 8 + 8 * Math.cos((k * Math.PI) / 9);
@@ -203,6 +223,25 @@ describe('cumulativeRadialProbability and radiusEnclosingProbability', () => {
       0.999,
       { abs: 1e-13 },
     );
+  });
+
+  it('when the 1s sphere enclosing p is found, then |ψ_1s(r_p)|² is the REFERENCE.md §9 isovalue', () => {
+    const isovalues: [number, number][] = [
+      [0.5, 0.02195434521057258],
+      [0.9, 0.001553802348981213],
+      [0.95, 5.869778296721651e-4],
+      [0.99, 7.115309030325548e-5],
+    ];
+    for (const [p, density] of isovalues) {
+      const rp = radiusEnclosingProbability(1, 0, p);
+      // ψ_1s = R_10 Y_00 with Y_00 = 1/(2√π).
+      expectClose(
+        (radialFunction(1, 0, rp) / (2 * Math.sqrt(Math.PI))) ** 2,
+        density,
+        { rel: 1e-12 },
+        p,
+      );
+    }
   });
 
   it('when r is 0 or very large, then P is 0 or 1', () => {
