@@ -114,22 +114,6 @@ function readWeight(term: OrbitalTerm, field: string): Complex {
   };
 }
 
-/** Adds w·Y_l^m to the complex-basis map. */
-function add(
-  map: Map<string, { n: number; l: number; m: number; c: Complex }>,
-  n: number,
-  l: number,
-  m: number,
-  re: number,
-  im: number,
-): void {
-  const key = `${n},${l},${m}`;
-  const entry = map.get(key) ?? { n, l, m, c: { re: 0, im: 0 } };
-  entry.c.re += re;
-  entry.c.im += im;
-  map.set(key, entry);
-}
-
 function compileRealTerm(
   n: number,
   l: number,
@@ -155,6 +139,135 @@ function compileRealTerm(
   };
 }
 
+type Coefficient = { n: number; l: number; m: number; c: Complex };
+const key = (n: number, l: number, m: number): string => `${n},${l},${m}`;
+const size = (c: Complex): number => Math.hypot(c.re, c.im);
+
+/** Validates the terms and adds them up in the complex basis; returns the map and Σ|weight| as given. */
+function collectComplexBasis(terms: OrbitalTerm[]): {
+  coefficients: Coefficient[];
+  weightGiven: number;
+} {
+  const map = new Map<string, Coefficient>();
+  const add = (n: number, l: number, m: number, re: number, im: number): void => {
+    const entry = map.get(key(n, l, m)) ?? { n, l, m, c: { re: 0, im: 0 } };
+    entry.c.re += re;
+    entry.c.im += im;
+    map.set(key(n, l, m), entry);
+  };
+  let weightGiven = 0;
+  terms.forEach((term, i) => {
+    const f = `terms[${i}]`;
+    if (typeof term !== 'object' || term === null)
+      throw new OrbitalInputError(f, 'must be an object');
+    const n = checkPrincipal(term.n, `${f}.n`);
+    const l = checkAngular(term.l, n, `${f}.l`);
+    const m = checkMagnetic(term.m, l, `${f}.m`);
+    if (term.basis !== 'real' && term.basis !== 'complex') {
+      throw new OrbitalInputError(`${f}.basis`, 'must be "real" or "complex"');
+    }
+    const w = readWeight(term, `${f}.weight`);
+    weightGiven += size(w);
+    if (term.basis === 'complex' || m === 0) {
+      add(n, l, m, w.re, w.im);
+      return;
+    }
+    const mAbs = Math.abs(m);
+    const s = (mAbs % 2 === 0 ? 1 : -1) / Math.SQRT2;
+    if (m > 0) {
+      add(n, l, -mAbs, w.re / Math.SQRT2, w.im / Math.SQRT2);
+      add(n, l, mAbs, s * w.re, s * w.im);
+    } else {
+      // i·w/√2 on Y^{−m}, −i·w·(−1)^m/√2 on Y^{m}.
+      add(n, l, -mAbs, -w.im / Math.SQRT2, w.re / Math.SQRT2);
+      add(n, l, mAbs, s * w.im, -s * w.re);
+    }
+  });
+  return { coefficients: [...map.values()], weightGiven };
+}
+
+/** Drops cancelled terms, normalises to Σ|c|² = 1, applies e^{−iE_n t}; sorted by n, l, m. */
+function normaliseAndEvolve(
+  entries: Coefficient[],
+  weightGiven: number,
+  muZ2: number,
+  time: number,
+): Coefficient[] {
+  let norm2 = 0;
+  let largest = 0;
+  for (const e of entries) {
+    norm2 += e.c.re * e.c.re + e.c.im * e.c.im;
+    largest = Math.max(largest, size(e.c));
+  }
+  if (!(Math.sqrt(norm2) > CANCELLED * weightGiven)) {
+    throw new OrbitalInputError(
+      'terms',
+      'the total weight is zero (the terms cancel or all weights are 0)',
+    );
+  }
+  const kept = entries.filter((e) => size(e.c) > CANCELLED * largest);
+  let keptNorm2 = 0;
+  for (const e of kept) keptNorm2 += e.c.re * e.c.re + e.c.im * e.c.im;
+  const scale = 1 / Math.sqrt(keptNorm2);
+  for (const e of kept) {
+    const angle = -energyValue(e.n, muZ2) * time;
+    const c = Math.cos(angle);
+    const s = Math.sin(angle);
+    e.c = { re: (e.c.re * c - e.c.im * s) * scale, im: (e.c.re * s + e.c.im * c) * scale };
+  }
+  return kept.sort((p, q) => p.n - q.n || p.l - q.l || p.m - q.m);
+}
+
+/**
+ * Real-basis coefficients: d_{+m} = [(−1)^m c_m + c_{−m}]/√2, d_{−m} = i[(−1)^m c_m − c_{−m}]/√2, d_0 = c_0.
+ * Grouped by (n, l) because the input is sorted; cancelled ones dropped.
+ */
+function toRealBasis(kept: Coefficient[]): Coefficient[] {
+  const lookup = new Map(kept.map((e) => [key(e.n, e.l, e.m), e.c]));
+  const out: Coefficient[] = [];
+  const seen = new Set<string>();
+  for (const e of kept) {
+    const mAbs = Math.abs(e.m);
+    if (seen.has(key(e.n, e.l, mAbs))) continue;
+    seen.add(key(e.n, e.l, mAbs));
+    if (mAbs === 0) {
+      out.push({ n: e.n, l: e.l, m: 0, c: { ...e.c } });
+      continue;
+    }
+    const plus = lookup.get(key(e.n, e.l, mAbs)) ?? { re: 0, im: 0 };
+    const minus = lookup.get(key(e.n, e.l, -mAbs)) ?? { re: 0, im: 0 };
+    const s = mAbs % 2 === 0 ? 1 : -1;
+    const difRe = (s * plus.re - minus.re) / Math.SQRT2;
+    const difIm = (s * plus.im - minus.im) / Math.SQRT2;
+    out.push({
+      n: e.n,
+      l: e.l,
+      m: mAbs,
+      c: { re: (s * plus.re + minus.re) / Math.SQRT2, im: (s * plus.im + minus.im) / Math.SQRT2 },
+    });
+    out.push({ n: e.n, l: e.l, m: -mAbs, c: { re: -difIm, im: difRe } });
+  }
+  const biggest = Math.max(...out.map((r) => size(r.c)));
+  return out.filter((r) => size(r.c) > CANCELLED * biggest);
+}
+
+/**
+ * The phase factor to multiply by so that the largest real-basis coefficient becomes real, its phase
+ * folded into (−π/2, π/2] (real weights keep their signs); null when the state stays complex after it.
+ */
+function realisingPhase(real: Coefficient[]): Complex | null {
+  let biggest = real[0];
+  for (const r of real) if (size(r.c) > size(biggest.c)) biggest = r;
+  let phase = Math.atan2(biggest.c.im, biggest.c.re);
+  if (phase > Math.PI / 2) phase -= Math.PI;
+  if (phase <= -Math.PI / 2) phase += Math.PI;
+  const undo = { re: Math.cos(phase), im: -Math.sin(phase) };
+  const tolerance = REAL_TOLERANCE * size(biggest.c);
+  return real.every((r) => Math.abs(r.c.re * undo.im + r.c.im * undo.re) <= tolerance)
+    ? undo
+    : null;
+}
+
 export function compileState(state: OrbitalState): CompiledState {
   if (typeof state !== 'object' || state === null)
     throw new OrbitalInputError('state', 'must be an object');
@@ -162,137 +275,39 @@ export function compileState(state: OrbitalState): CompiledState {
   const muRatio = reducedMassRatio(Z, state.reducedMass);
   const zEff = Z * muRatio;
   const time = state.time === undefined ? 0 : checkFinite(state.time, 'time');
-  if (!Array.isArray(state.terms) || state.terms.length === 0)
+  if (!Array.isArray(state.terms) || state.terms.length === 0) {
     throw new OrbitalInputError('terms', 'must be a non-empty list');
-  if (state.terms.length > MAX_STATE_TERMS)
+  }
+  if (state.terms.length > MAX_STATE_TERMS) {
     throw new OrbitalInputError(
       'terms',
       `at most ${MAX_STATE_TERMS} terms, got ${state.terms.length}`,
     );
-
-  const complexBasis = new Map<string, { n: number; l: number; m: number; c: Complex }>();
-  let weightGiven = 0;
-  state.terms.forEach((term, i) => {
-    const f = `terms[${i}]`;
-    if (typeof term !== 'object' || term === null)
-      throw new OrbitalInputError(f, 'must be an object');
-    const n = checkPrincipal(term.n, `${f}.n`);
-    const l = checkAngular(term.l, n, `${f}.l`);
-    const m = checkMagnetic(term.m, l, `${f}.m`);
-    if (term.basis !== 'real' && term.basis !== 'complex')
-      throw new OrbitalInputError(`${f}.basis`, 'must be "real" or "complex"');
-    const w = readWeight(term, `${f}.weight`);
-    weightGiven += Math.hypot(w.re, w.im);
-    if (term.basis === 'complex' || m === 0) {
-      add(complexBasis, n, l, m, w.re, w.im);
-      return;
-    }
-    const mAbs = Math.abs(m);
-    const s = (mAbs % 2 === 0 ? 1 : -1) / Math.SQRT2;
-    if (m > 0) {
-      add(complexBasis, n, l, -mAbs, w.re / Math.SQRT2, w.im / Math.SQRT2);
-      add(complexBasis, n, l, mAbs, s * w.re, s * w.im);
-    } else {
-      // i·w/√2 on Y^{−m}, −i·w·(−1)^m/√2 on Y^{m}.
-      add(complexBasis, n, l, -mAbs, -w.im / Math.SQRT2, w.re / Math.SQRT2);
-      add(complexBasis, n, l, mAbs, s * w.im, -s * w.re);
-    }
-  });
-
-  const entries = [...complexBasis.values()];
-  let norm2 = 0;
-  let largest = 0;
-  for (const e of entries) {
-    const a2 = e.c.re * e.c.re + e.c.im * e.c.im;
-    norm2 += a2;
-    largest = Math.max(largest, Math.sqrt(a2));
   }
-  if (!(Math.sqrt(norm2) > CANCELLED * weightGiven))
-    throw new OrbitalInputError(
-      'terms',
-      'the total weight is zero (the terms cancel or all weights are 0)',
-    );
-  const kept = entries.filter((e) => Math.hypot(e.c.re, e.c.im) > CANCELLED * largest);
-  let keptNorm2 = 0;
-  for (const e of kept) keptNorm2 += e.c.re * e.c.re + e.c.im * e.c.im;
-  const scale = 1 / Math.sqrt(keptNorm2);
-  for (const e of kept) {
-    // e^{−iE_n t}
-    const angle = -energyValue(e.n, Z * Z * muRatio) * time;
-    const c = Math.cos(angle);
-    const s = Math.sin(angle);
-    const re = (e.c.re * c - e.c.im * s) * scale;
-    const im = (e.c.re * s + e.c.im * c) * scale;
-    e.c.re = re;
-    e.c.im = im;
-  }
-  kept.sort((p, q) => p.n - q.n || p.l - q.l || p.m - q.m);
 
-  // Real-basis coefficients: d_{+m} = [(−1)^m c_m + c_{−m}]/√2, d_{−m} = i[(−1)^m c_m − c_{−m}]/√2, d_0 = c_0.
-  const lookup = new Map(kept.map((e) => [`${e.n},${e.l},${e.m}`, e.c]));
-  const realCoefficients: { n: number; l: number; m: number; c: Complex }[] = [];
-  const seen = new Set<string>();
-  for (const e of kept) {
-    const mAbs = Math.abs(e.m);
-    const key = `${e.n},${e.l},${mAbs}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    if (mAbs === 0) {
-      realCoefficients.push({ n: e.n, l: e.l, m: 0, c: { ...e.c } });
-      continue;
-    }
-    const plus = lookup.get(`${e.n},${e.l},${mAbs}`) ?? { re: 0, im: 0 };
-    const minus = lookup.get(`${e.n},${e.l},${-mAbs}`) ?? { re: 0, im: 0 };
-    const s = mAbs % 2 === 0 ? 1 : -1;
-    const cosRe = (s * plus.re + minus.re) / Math.SQRT2;
-    const cosIm = (s * plus.im + minus.im) / Math.SQRT2;
-    const difRe = (s * plus.re - minus.re) / Math.SQRT2;
-    const difIm = (s * plus.im - minus.im) / Math.SQRT2;
-    realCoefficients.push({ n: e.n, l: e.l, m: mAbs, c: { re: cosRe, im: cosIm } });
-    realCoefficients.push({ n: e.n, l: e.l, m: -mAbs, c: { re: -difIm, im: difRe } });
-  }
-  let biggest = realCoefficients[0];
-  for (const r of realCoefficients)
-    if (Math.hypot(r.c.re, r.c.im) > Math.hypot(biggest.c.re, biggest.c.im)) biggest = r;
-  const biggestSize = Math.hypot(biggest.c.re, biggest.c.im);
-  const real = realCoefficients.filter((r) => Math.hypot(r.c.re, r.c.im) > CANCELLED * biggestSize);
-
-  // Fold the phase of the largest coefficient into (−π/2, π/2] and test whether removing it leaves all real.
-  let phase = Math.atan2(biggest.c.im, biggest.c.re);
-  if (phase > Math.PI / 2) phase -= Math.PI;
-  if (phase <= -Math.PI / 2) phase += Math.PI;
-  const undo = { re: Math.cos(phase), im: -Math.sin(phase) };
-  const isReal = real.every(
-    (r) => Math.abs(r.c.re * undo.im + r.c.im * undo.re) <= REAL_TOLERANCE * biggestSize,
-  );
+  const { coefficients, weightGiven } = collectComplexBasis(state.terms);
+  const kept = normaliseAndEvolve(coefficients, weightGiven, Z * Z * muRatio, time);
+  const real = toRealBasis(kept);
+  const undo = realisingPhase(real);
   const rotate = (c: Complex): Complex =>
-    isReal
-      ? { re: c.re * undo.re - c.im * undo.im, im: c.re * undo.im + c.im * undo.re }
-      : { ...c };
+    undo === null
+      ? { ...c }
+      : { re: c.re * undo.re - c.im * undo.im, im: c.re * undo.im + c.im * undo.re };
 
   const distinctN = [...new Set(real.map((r) => r.n))].sort((p, q) => p - q);
-  // real is grouped by (n, l), so terms sharing a radial factor are adjacent.
   const realTerms = real.map((r, i) => {
     const c = rotate(r.c);
-    return compileRealTerm(
-      r.n,
-      r.l,
-      r.m,
-      isReal ? { re: c.re, im: 0 } : c,
-      zEff,
-      distinctN,
-      real[i - 1],
-    );
+    const coefficient = undo === null ? c : { re: c.re, im: 0 };
+    return compileRealTerm(r.n, r.l, r.m, coefficient, zEff, distinctN, real[i - 1]);
   });
-  const terms = kept.map((e) => ({ n: e.n, l: e.l, m: e.m, coefficient: rotate(e.c) }));
   return {
     Z,
     muRatio,
     zEff,
     time,
-    isReal,
-    removedPhase: isReal ? { re: undo.re, im: -undo.im } : { re: 1, im: 0 },
-    terms,
+    isReal: undo !== null,
+    removedPhase: undo === null ? { re: 1, im: 0 } : { re: undo.re, im: -undo.im },
+    terms: kept.map((e) => ({ n: e.n, l: e.l, m: e.m, coefficient: rotate(e.c) })),
     realTerms,
     distinctN,
   };
