@@ -8,7 +8,18 @@ export default defineConfig({
   publicDir: false,
   plugins: [react(), tailwindcss()],
   resolve: { alias: { '@shared': new URL('./shared', import.meta.url).pathname } },
-  build: { outDir: '../dist/app', emptyOutDir: true, sourcemap: true },
+  build: {
+    outDir: '../dist/app',
+    emptyOutDir: true,
+    sourcemap: true,
+    // Second entry: the page the print renderer (api/render/render-3d.ts) loads to draw 3D figures.
+    rollupOptions: {
+      input: {
+        main: new URL('./app/index.html', import.meta.url).pathname,
+        'print-3d': new URL('./app/print-3d.html', import.meta.url).pathname,
+      },
+    },
+  },
   worker: { format: 'es' },
   server: {
     port: 5173,

@@ -6,7 +6,7 @@ import { physicsToThree } from '../../../../shared/physics/coordinates';
 
 export const AXIS_NAMES = ['x', 'y', 'z'] as const;
 /** Axis half-length as a multiple of the figure's radius. */
-export const AXIS_REACH = 1.2;
+export const AXIS_REACH = 1.15;
 
 /** Positive end of each physics axis in the three.js frame. */
 export function axisEnds(radius: number): [number, number, number][] {

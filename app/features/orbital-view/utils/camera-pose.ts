@@ -15,7 +15,7 @@ import type { FigureSpec } from '../../../../shared/spec/figure-spec';
 export type ViewSettings = FigureSpec['view'];
 
 /** Room around the figure's sphere at zoom 1 (fraction of its radius). */
-export const FRAME_MARGIN = 1.12;
+export const FRAME_MARGIN = 1.3;
 /** Vertical field of view of the perspective camera, degrees. */
 export const PERSPECTIVE_FOV = 30;
 /** Elevations this close to ±90° count as straight down or up. */
