@@ -1,0 +1,18 @@
+/**
+ * The 2D figure builders behind one entry point: a resolved spec → its scene, dispatching on the
+ * figure kind. 3D kinds (isosurface, cloud, angular surface) are drawn by the 3D renderer; their
+ * vector overlay comes from build3dOverlay.
+ */
+import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
+import { buildRadialScene } from './build-radial-scene';
+import { FigureSpecError } from './figure-error';
+import type { FigureScene } from './scene';
+
+export function buildFigureScene(spec: ResolvedFigureSpec): FigureScene {
+  switch (spec.kind.type) {
+    case 'radial':
+      return buildRadialScene(spec);
+    default:
+      throw new FigureSpecError('kind.type', `"${spec.kind.type}" is not a 2D figure; draw it with the 3D renderer and build3dOverlay`);
+  }
+}
