@@ -1,8 +1,8 @@
 // Benchmark of the isosurface pipeline (shared/grid): for 4f states on a 128³ grid, the time to
-// sample ψ, find the 90 % level and mesh both phases, median of 5 runs after one warm-up, one core.
+// sample ψ, find the 90 % level (sample count sharpened by the voxel model, as buildIsosurface does)
+// and mesh both phases, median of 5 runs after one warm-up, one core.
 // Prints one JSON object; scripts/bench puts it under "isosurface".
-import { enclosedProbabilityLevels } from '../shared/grid/enclosed-probability-level';
-import { gridSpacing } from '../shared/grid/grid-spec';
+import { findIsosurfaceLevels } from '../shared/grid/find-isosurface-levels';
 import { marchingCubes } from '../shared/grid/marching-cubes';
 import { compileState } from '../shared/physics/orbital-state';
 import { sampleStateOnGrid, suggestedExtent } from '../shared/physics/sample-state-on-grid';
@@ -29,7 +29,7 @@ for (const { label, n, l, m } of STATES) {
     const t0 = performance.now();
     sampleStateOnGrid(state, grid, psi, null);
     const t1 = performance.now();
-    const [level] = enclosedProbabilityLevels(psi, null, gridSpacing(grid) ** 3, [ENCLOSED]);
+    const [level] = findIsosurfaceLevels(psi, null, grid, [ENCLOSED]);
     const t2 = performance.now();
     const positive = marchingCubes(psi, grid, { isovalue: level.psiLevel });
     const negative = marchingCubes(psi, grid, { isovalue: level.psiLevel, sign: -1 });
@@ -41,7 +41,9 @@ for (const { label, n, l, m } of STATES) {
     times.total.push(t3 - t0);
     summary = {
       densityLevel: level.densityLevel,
+      levelMethod: level.method,
       enclosed: level.enclosed,
+      enclosedBySamples: level.enclosedBySamples,
       gridTotal: level.gridTotal,
       triangles: { positive: positive.triangleCount, negative: negative.triangleCount },
       vertices: { positive: positive.vertexCount, negative: negative.vertexCount },

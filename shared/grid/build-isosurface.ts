@@ -1,6 +1,6 @@
 /**
  * The isosurface of a state enclosing a chosen probability, ready to draw: sample ψ on the grid,
- * find the level (enclosed-probability-level.ts), mesh it (marching-cubes.ts). One function for
+ * find the level (find-isosurface-levels.ts), mesh it (marching-cubes.ts). One function for
  * the browser's worker, the server's print renderer and the command-line tool.
  *
  * Real states give two surfaces, ψ = +√c (positive phase) and ψ = −√c (negative phase); complex
@@ -9,8 +9,8 @@
  */
 import type { CompiledState } from '../physics/orbital-state';
 import { OrbitalInputError } from '../physics/orbital-input-error';
-import { enclosedProbabilityLevels } from './enclosed-probability-level';
-import { gridSpacing, type GridSpec } from './grid-spec';
+import { findIsosurfaceLevels, type LevelMethod } from './find-isosurface-levels';
+import type { GridSpec } from './grid-spec';
 import { DEFAULT_MAX_TRIANGLES, marchingCubes } from './marching-cubes';
 import { sampleStateField } from './sample-state-field';
 import type { TriangleMesh } from './triangle-mesh';
@@ -24,6 +24,8 @@ export interface IsosurfaceOptions {
   extent?: number;
   /** Largest number of triangles for each surface (default DEFAULT_MAX_TRIANGLES). */
   maxTriangles?: number;
+  /** How the level is found (default "sub-voxel", see find-isosurface-levels.ts). */
+  levelMethod?: LevelMethod;
 }
 
 export interface Isosurface {
@@ -33,8 +35,12 @@ export interface Isosurface {
   readonly densityLevel: number;
   /** |ψ| on the surface, bohr^(−3/2). */
   readonly psiLevel: number;
-  /** Probability inside the surface as summed on the grid (≥ the fraction asked for). */
+  /** Probability inside the surface, over the exact total 1: the fraction asked for to 1e-12 with
+   * the sub-voxel level; with the sample count, what the samples inside hold (≥ the fraction). */
   readonly enclosed: number;
+  /** Probability of the grid samples inside (|ψ|² ≥ c): the whole-sample count at this level. */
+  readonly enclosedBySamples: number;
+  readonly levelMethod: LevelMethod;
   /** Probability the whole grid holds; below 1 by what lies outside the extent (and quadrature error). */
   readonly gridTotal: number;
   /** True when the region reaches the grid's faces: the surfaces are cut open there. */
@@ -68,11 +74,14 @@ export function buildIsosurface(c: CompiledState, options: IsosurfaceOptions): I
   if (typeof options.enclosed !== 'number' || !(options.enclosed > 0 && options.enclosed < 1)) {
     throw new OrbitalInputError('enclosed', `must be a fraction strictly between 0 and 1, got ${String(options.enclosed)}`);
   }
+  if (options.levelMethod !== undefined && options.levelMethod !== 'sub-voxel' && options.levelMethod !== 'samples') {
+    throw new OrbitalInputError('levelMethod', `must be "sub-voxel" or "samples", got ${String(options.levelMethod)}`);
+  }
   const maxTriangles = options.maxTriangles ?? DEFAULT_MAX_TRIANGLES;
   const t0 = now();
   const { grid, re, im } = sampleStateField(c, { n: options.grid, extent: options.extent });
   const t1 = now();
-  const [level] = enclosedProbabilityLevels(re, im, gridSpacing(grid) ** 3, [options.enclosed]);
+  const [level] = findIsosurfaceLevels(re, im, grid, [options.enclosed], options.levelMethod);
   const t2 = now();
   let positive: TriangleMesh | null = null;
   let negative: TriangleMesh | null = null;
@@ -91,6 +100,8 @@ export function buildIsosurface(c: CompiledState, options: IsosurfaceOptions): I
     densityLevel: level.densityLevel,
     psiLevel: level.psiLevel,
     enclosed: level.enclosed,
+    enclosedBySamples: level.enclosedBySamples,
+    levelMethod: level.method,
     gridTotal: level.gridTotal,
     clippedByGrid: touchesFaces(re, im, grid.n, level.densityLevel),
     positive,

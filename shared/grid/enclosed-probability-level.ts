@@ -21,6 +21,7 @@
  * estimate with groups of 48 gives, for a sphere of radius r, σ(c)/c ≈ 1.13 h²/r: about 1 % at
  * h = 0.2 bohr and 0.3 % at h = 0.1 bohr for the 1s 90 % surface (r = 2.66 bohr). The level is
  * grid-limited; the measured errors are in tests/unit/grid/enclosed-probability-level.test.ts.
+ * sub-voxel-level.ts sharpens this level (find-isosurface-levels.ts combines the two).
  */
 import { OrbitalInputError } from '../physics/orbital-input-error';
 

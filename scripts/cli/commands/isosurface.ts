@@ -1,7 +1,8 @@
 // `scripts/lobewright isosurface`: the isosurface of one hydrogen-like orbital enclosing a chosen
 // probability — its level, the probability the grid region holds, triangle counts and timings.
 // Request: { "Z", "n", "l", "m", "basis"?: "real" | "complex", "enclosed"?: 0.9, "grid"?: 128,
-//            "extent"?: bohr, "reducedMass"?: boolean, "maxTriangles"?: number }
+//            "extent"?: bohr, "reducedMass"?: boolean, "maxTriangles"?: number,
+//            "levelMethod"?: "sub-voxel" | "samples" }
 import { z } from 'zod';
 import { buildIsosurface } from '../../../shared/grid/build-isosurface';
 import { compileState } from '../../../shared/physics/orbital-state';
@@ -19,6 +20,7 @@ const request = z.strictObject({
   extent: z.number().optional(),
   reducedMass: z.boolean().optional(),
   maxTriangles: z.number().int().optional(),
+  levelMethod: z.enum(['sub-voxel', 'samples']).optional(),
 });
 
 /** Orbital errors name fields of the state ("terms[0].l"); the request has them at the top level. */
@@ -33,14 +35,16 @@ const isosurface: CliCommand = (input) => {
     if (issue.code === 'unrecognized_keys') throw new CliError(issue.keys[0], `is not a field of an isosurface request`);
     throw new CliError(issue.path.length > 0 ? issue.path.join('.') : 'request', issue.message);
   }
-  const { Z, n, l, m, basis, enclosed, grid, extent, reducedMass, maxTriangles } = parsed.data;
+  const { Z, n, l, m, basis, enclosed, grid, extent, reducedMass, maxTriangles, levelMethod } = parsed.data;
   try {
     const state = compileState({ Z, reducedMass, terms: [{ n, l, m, basis }] });
-    const result = buildIsosurface(state, { enclosed, grid, extent, maxTriangles });
+    const result = buildIsosurface(state, { enclosed, grid, extent, maxTriangles, levelMethod });
     return {
       densityLevel: result.densityLevel,
       psiLevel: result.psiLevel,
       enclosed: result.enclosed,
+      enclosedBySamples: result.enclosedBySamples,
+      levelMethod: result.levelMethod,
       gridTotal: result.gridTotal,
       grid: result.grid.n,
       extent: result.grid.half,

@@ -1,7 +1,7 @@
 // `scripts/lobewright isosurface` as a user runs it: one JSON request in, one JSON answer out.
 // Checks: the 1s 90 % level of REFERENCE.md §9 and the 2p_z level from the mpmath fixture
-// (tests/unit/grid/fixtures/enclosed-probability-level.json), each within the grid tolerance
-// 2σ, σ(c)/c ≈ 1.13 h²/r (shared/grid/enclosed-probability-level.ts).
+// (tests/unit/grid/fixtures/enclosed-probability-level.json), each within the grid tolerance of
+// the default sub-voxel level, h²/3 (shared/grid/sub-voxel-level.ts).
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
@@ -13,6 +13,8 @@ interface Answer {
   densityLevel: number;
   psiLevel: number;
   enclosed: number;
+  enclosedBySamples: number;
+  levelMethod: string;
   gridTotal: number;
   extent: number;
   triangles: { positive: number; negative: number; magnitude: number };
@@ -31,9 +33,11 @@ describe('scripts/lobewright isosurface', () => {
     expect(status).toBe(0);
     const h = (2 * answer.extent) / 95;
     const c = 0.001553802348981213;
-    expect(Math.abs(answer.densityLevel - c) / c).toBeLessThan((2 * 1.13 * h * h) / 2.661160168917105);
+    expect(Math.abs(answer.densityLevel - c) / c).toBeLessThan((h * h) / 3);
     expect(answer.psiLevel).toBeCloseTo(Math.sqrt(answer.densityLevel), 15);
-    expect(answer.enclosed).toBeGreaterThanOrEqual(0.9);
+    expect(answer.levelMethod).toBe('sub-voxel');
+    expect(Math.abs(answer.enclosed - 0.9)).toBeLessThan(1e-12);
+    expect(Math.abs(answer.enclosedBySamples - 0.9)).toBeLessThan(0.01);
     expect(answer.gridTotal).toBeGreaterThan(0.999);
     expect(answer.triangles.positive).toBeGreaterThan(1000);
     expect(answer.triangles.negative).toBe(0);
@@ -45,7 +49,7 @@ describe('scripts/lobewright isosurface', () => {
     expect(status).toBe(0);
     const exact = fixture['2p_z'].find((x) => x.enclosed === 0.9)!;
     const h = 24 / 127;
-    expect(Math.abs(answer.densityLevel - exact.densityLevel) / exact.densityLevel).toBeLessThan((2 * 1.13 * h * h) / (exact.zOuter / 2));
+    expect(Math.abs(answer.densityLevel - exact.densityLevel) / exact.densityLevel).toBeLessThan((h * h) / 3);
     expect(answer.triangles.negative).toBe(answer.triangles.positive);
   });
 
@@ -60,6 +64,7 @@ describe('scripts/lobewright isosurface', () => {
     expect(run({ Z: 1, n: 2, l: 2, m: 0 }).answer.error.field).toBe('l');
     expect(run({ Z: 1, n: 2, l: 1, m: 0, enclosed: 1.2 }).answer.error.field).toBe('enclosed');
     expect(run({ Z: 1, n: 2, l: 1, m: 0, colour: 'red' }).answer.error.field).toBe('colour');
+    expect(run({ Z: 1, n: 2, l: 1, m: 0, levelMethod: 'exact' }).answer.error.field).toBe('levelMethod');
     expect(run({ n: 2, l: 1, m: 0 }).answer.error.field).toBe('Z');
   });
 });

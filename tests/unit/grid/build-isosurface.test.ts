@@ -9,8 +9,10 @@ import { componentCount, edgeUse, eulerCharacteristic } from './test-fields';
 
 const state = (n: number, l: number, m: number, basis: 'real' | 'complex' = 'real', Z = 1) =>
   compileState({ Z, terms: [{ n, l, m, basis }] });
-// Level tolerance 2σ, σ(c)/c ≈ 1.13 h²/r (see shared/grid/enclosed-probability-level.ts).
-const tolerance = (h: number, r: number): number => 2 * 1.13 * (h * h) / r;
+// Level tolerances: sub-voxel (default) h²/3 (shared/grid/sub-voxel-level.ts); sample count 2σ with
+// σ(c)/c ≈ 1.13 h²/r (shared/grid/enclosed-probability-level.ts).
+const subVoxelTolerance = (h: number): number => (h * h) / 3;
+const countTolerance = (h: number, r: number): number => 2 * 1.13 * (h * h) / r;
 
 describe('buildIsosurface, 1s at 90 % on the automatic grid (n = 96)', () => {
   const result = buildIsosurface(state(1, 0, 0), { enclosed: 0.9, grid: 96 });
@@ -18,9 +20,11 @@ describe('buildIsosurface, 1s at 90 % on the automatic grid (n = 96)', () => {
 
   it('finds c_0.9 of REFERENCE.md §9 (0.001 553 802 348 981 213 bohr⁻³) within the grid tolerance', () => {
     const c = 0.001553802348981213;
-    expect(Math.abs(result.densityLevel - c) / c).toBeLessThan(tolerance(h, 2.661160168917105));
+    expect(result.levelMethod).toBe('sub-voxel');
+    expect(Math.abs(result.densityLevel - c) / c).toBeLessThan(subVoxelTolerance(h));
     expect(result.psiLevel).toBe(Math.sqrt(result.densityLevel));
-    expect(result.enclosed).toBeGreaterThanOrEqual(0.9);
+    expect(Math.abs(result.enclosed - 0.9)).toBeLessThan(1e-12);
+    expect(Math.abs(result.enclosedBySamples - 0.9)).toBeLessThan(0.01);
     expect(result.gridTotal).toBeGreaterThan(0.999);
     expect(result.gridTotal).toBeLessThan(1);
     expect(result.clippedByGrid).toBe(false);
@@ -36,6 +40,15 @@ describe('buildIsosurface, 1s at 90 % on the automatic grid (n = 96)', () => {
       const r = Math.hypot(mesh.positions[3 * v], mesh.positions[3 * v + 1], mesh.positions[3 * v + 2]);
       expect(Math.abs(r - 2.661160168917105)).toBeLessThan(h / 2);
     }
+  });
+
+  it('can use the whole-sample count instead, which encloses at least the fraction asked for', () => {
+    const counted = buildIsosurface(state(1, 0, 0), { enclosed: 0.9, grid: 96, levelMethod: 'samples' });
+    const c = 0.001553802348981213;
+    expect(counted.levelMethod).toBe('samples');
+    expect(Math.abs(counted.densityLevel - c) / c).toBeLessThan(countTolerance(h, 2.661160168917105));
+    expect(counted.enclosed).toBeGreaterThanOrEqual(0.9);
+    expect(counted.enclosedBySamples).toBe(counted.enclosed);
   });
 
   it('is deterministic and reports three timings', () => {
@@ -57,7 +70,7 @@ describe('buildIsosurface, 2p_z at 90 % (n = 128, half-width 12 bohr)', () => {
   const h = 24 / 127;
 
   it('matches the mpmath level and gives two closed mirror-image lobes', () => {
-    expect(Math.abs(result.densityLevel - exact.densityLevel) / exact.densityLevel).toBeLessThan(tolerance(h, exact.zOuter / 2));
+    expect(Math.abs(result.densityLevel - exact.densityLevel) / exact.densityLevel).toBeLessThan(subVoxelTolerance(h));
     for (const mesh of [result.positive!, result.negative!]) {
       expect(componentCount(mesh)).toBe(1);
       expect([...new Set(edgeUse(mesh).values())]).toEqual([2]);
@@ -97,8 +110,9 @@ describe('limits and bad input', () => {
     expect(() => resolveGrid(s1, { n: 64, extent: 0 })).toThrow(/^extent:/);
     expect(() => resolveGrid(s1, { n: 64, extent: Number.POSITIVE_INFINITY })).toThrow(/^extent:/);
   });
-  it('refuses enclosed fractions outside (0, 1), naming "enclosed"', () => {
+  it('refuses enclosed fractions outside (0, 1) and unknown level methods, naming the field', () => {
     expect(() => buildIsosurface(s1, { enclosed: 1, grid: 32 })).toThrow(/^enclosed: must be a fraction strictly between 0 and 1/);
+    expect(() => buildIsosurface(s1, { enclosed: 0.5, grid: 32, levelMethod: 'exact' as 'samples' })).toThrow(/^levelMethod:/);
   });
   it('refuses meshes above the triangle cap, naming "maxTriangles"', () => {
     expect(() => buildIsosurface(s1, { enclosed: 0.9, grid: 64, maxTriangles: 1000 })).toThrow(/^maxTriangles:/);
