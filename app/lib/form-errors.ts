@@ -17,6 +17,9 @@ function plainMessage(issue: z.core.$ZodIssue): string {
     return `Must be at least ${issue.minimum}`;
   if (issue.code === 'too_big' && issue.origin === 'number')
     return `Must be at most ${issue.maximum}`;
+  if (issue.code === 'too_small' && issue.origin === 'array')
+    return Number(issue.minimum) <= 1 ? 'Choose at least one' : `Choose at least ${issue.minimum}`;
+  if (issue.code === 'invalid_type' && issue.expected === 'number') return 'Enter a number';
   if (issue.code === 'invalid_format' && issue.format === 'email')
     return 'Enter an e-mail address such as name@example.org';
   return issue.message;

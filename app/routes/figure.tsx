@@ -6,6 +6,7 @@ import { roleAllows } from '../../shared/api/roles';
 import type { Figure, Project } from '../../shared/api/schemas';
 import { PageHeader } from '../components/ui/page-header';
 import { RoleBadge } from '../components/ui/role-badge';
+import { Panel } from '../components/ui/panel';
 import { ErrorPanel, Loading } from '../components/ui/status';
 import { useFigure } from '../features/figures/api/get-figure';
 import { FigureActions } from '../features/figures/components/figure-actions';
@@ -14,6 +15,7 @@ import { FigureDetailsView } from '../features/figures/components/figure-details
 import { RevisionList } from '../features/figures/components/revision-list';
 import { SpecSummary } from '../features/figures/components/spec-summary';
 import { StatusBadge } from '../features/figures/components/status-badge';
+import { useHouseStyle } from '../features/house-style/api/get-house-style';
 import { useProject } from '../features/projects/api/get-project';
 import { projectsQueryKey } from '../features/projects/api/get-projects';
 import { useDocumentTitle } from '../hooks/use-document-title';
@@ -47,18 +49,9 @@ function FigureWithProject({ figure }: { figure: Figure }) {
   return <FigurePage figure={figure} project={project.data} />;
 }
 
-function Panel({ id, title, children }: { id: string; title: string; children: React.ReactNode }) {
-  return (
-    <section aria-labelledby={id} className="rounded-xl border border-stone-200 bg-white p-6">
-      <h2 id={id} className="mb-4 text-lg font-semibold">
-        {title}
-      </h2>
-      {children}
-    </section>
-  );
-}
-
 function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
+  // Only sharpens the print line of the summary, so the page does not wait for it.
+  const houseStyle = useHouseStyle(project.id);
   const navigate = useNavigate();
   const queryClient = useQueryClient();
   const canEdit = roleAllows(project.role, 'edit') && !project.archived;
@@ -135,7 +128,7 @@ function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
           )}
         </Panel>
         <Panel id="spec-title" title="What the figure shows">
-          <SpecSummary spec={figure.spec} />
+          <SpecSummary spec={figure.spec} houseStyle={houseStyle.data} />
         </Panel>
       </div>
       <div className="mt-6">

@@ -18,6 +18,7 @@ export function buttonClasses(
   return cn(
     'inline-flex items-center justify-center gap-2 rounded-md font-semibold transition-colors',
     'disabled:cursor-not-allowed disabled:opacity-55',
+    'aria-pressed:border-accent-600 aria-pressed:bg-accent-50 aria-pressed:text-accent-800',
     size === 'sm' ? 'px-2.5 py-1 text-sm' : 'px-4 py-2 text-sm',
     variants[variant],
   );

@@ -1,6 +1,8 @@
 // A figure spec summarised in words, as label/value pairs for the figure page. Stored values
 // only; unset look and print settings are said to come from the house style.
 import type { FigureSpec, SpecTerm } from '../../../../shared/spec/figure-spec';
+import type { HouseStyle } from '../../../../shared/spec/house-style';
+import { resolveFigureSpec } from '../../../../shared/spec/resolve-figure-spec';
 import { figureKindInfo } from './figure-kinds';
 import { angularMomentumLetter, orbitalLabel } from '../../../../shared/physics/orbital-labels';
 import { signedNumber } from './signed-number';
@@ -93,24 +95,33 @@ function describeKind(spec: FigureSpec): string {
   }
 }
 
-function describePrint(spec: FigureSpec): string {
-  const p = spec.print;
-  const parts = [
-    p.widthMm !== undefined && p.heightMm !== undefined
-      ? `${p.widthMm} × ${p.heightMm} mm`
-      : p.widthMm !== undefined
-        ? `${p.widthMm} mm wide`
-        : null,
-    p.dpi !== undefined ? `${p.dpi} dpi` : null,
-    p.background !== undefined ? `${p.background} background` : null,
-    p.formats !== undefined ? p.formats.map((f) => f.toUpperCase()).join(' + ') : null,
-  ].filter((x): x is string => x !== null);
-  return parts.length
-    ? `${parts.join(', ')}; the rest from the house style`
-    : 'All from the house style';
+const PRINT_FIELD_NAMES = {
+  widthMm: 'width',
+  heightMm: 'height',
+  dpi: 'resolution',
+  background: 'background',
+  formats: 'formats',
+} as const;
+
+function describePrint(spec: FigureSpec, style: HouseStyle | undefined): string {
+  const own = (Object.keys(PRINT_FIELD_NAMES) as Array<keyof typeof PRINT_FIELD_NAMES>).filter(
+    (k) => spec.print[k] !== undefined,
+  );
+  if (!style) {
+    return own.length
+      ? `The figure sets its ${list(own.map((k) => PRINT_FIELD_NAMES[k]))}; the rest from the house style`
+      : 'All from the house style';
+  }
+  const p = resolveFigureSpec(spec, style).print;
+  const settings = `${p.widthMm} × ${p.heightMm} mm, ${p.dpi} dpi, ${p.background} background, ${p.formats.map((f) => f.toUpperCase()).join(' + ')}`;
+  const source = own.length
+    ? `the figure sets its ${list(own.map((k) => PRINT_FIELD_NAMES[k]))}, the rest from the house style`
+    : 'all from the house style';
+  return `${settings} (${source})`;
 }
 
-export function describeSpec(spec: FigureSpec): SpecLine[] {
+/** With the project's house style, print settings are given as they will be used. */
+export function describeSpec(spec: FigureSpec, style?: HouseStyle): SpecLine[] {
   const lines: SpecLine[] = [
     { term: 'Kind', detail: figureKindInfo[spec.kind.type].name },
     { term: 'State', detail: describeState(spec) },
@@ -128,7 +139,7 @@ export function describeSpec(spec: FigureSpec): SpecLine[] {
       detail: `Azimuth ${v.azimuthDeg}°, elevation ${v.elevationDeg}°, ${v.projection}, zoom ${v.zoom}`,
     });
   }
-  lines.push({ term: 'Print', detail: describePrint(spec) });
+  lines.push({ term: 'Print', detail: describePrint(spec, style) });
   if (spec.look.label) lines.push({ term: 'Label', detail: spec.look.label });
   return lines;
 }
