@@ -1,8 +1,10 @@
 // Benchmark of the isosurface pipeline (shared/grid): for 4f states on a 128³ grid, the time to
-// sample ψ, find the 90 % level (sample count sharpened by the voxel model, as buildIsosurface does)
-// and mesh both phases, median of 5 runs after one warm-up, one core.
+// sample ψ, find the 90 % level (the sample count, then sharpened by the voxel model, as
+// buildIsosurface does; both timed) and mesh both phases, median of 5 runs after one warm-up, one core.
 // Prints one JSON object; scripts/bench puts it under "isosurface".
-import { findIsosurfaceLevels } from '../shared/grid/find-isosurface-levels';
+import { enclosedProbabilityLevels } from '../shared/grid/enclosed-probability-level';
+import { gridSpacing } from '../shared/grid/grid-spec';
+import { subVoxelLevel } from '../shared/grid/sub-voxel-level';
 import { marchingCubes } from '../shared/grid/marching-cubes';
 import { compileState } from '../shared/physics/orbital-state';
 import { sampleStateOnGrid, suggestedExtent } from '../shared/physics/sample-state-on-grid';
@@ -23,28 +25,31 @@ for (const { label, n, l, m } of STATES) {
   const state = compileState({ Z: 1, terms: [{ n, l, m, basis: 'real' }] });
   const grid = { n: GRID, half: suggestedExtent(state) };
   const psi = new Float32Array(GRID ** 3);
-  const times = { sample: [] as number[], level: [] as number[], mesh: [] as number[], total: [] as number[] };
+  const times = { sample: [] as number[], levelCount: [] as number[], levelSubVoxel: [] as number[], mesh: [] as number[], total: [] as number[] };
   let summary = {};
   for (let run = 0; run <= RUNS; run++) {
     const t0 = performance.now();
     sampleStateOnGrid(state, grid, psi, null);
     const t1 = performance.now();
-    const [level] = findIsosurfaceLevels(psi, null, grid, [ENCLOSED]);
+    const [count] = enclosedProbabilityLevels(psi, null, gridSpacing(grid) ** 3, [ENCLOSED]);
+    const tCount = performance.now();
+    const level = subVoxelLevel(psi, null, grid, count)!;
     const t2 = performance.now();
     const positive = marchingCubes(psi, grid, { isovalue: level.psiLevel });
     const negative = marchingCubes(psi, grid, { isovalue: level.psiLevel, sign: -1 });
     const t3 = performance.now();
     if (run === 0) continue; // warm-up: lets the JIT compile the loops
     times.sample.push(t1 - t0);
-    times.level.push(t2 - t1);
+    times.levelCount.push(tCount - t1);
+    times.levelSubVoxel.push(t2 - tCount);
     times.mesh.push(t3 - t2);
     times.total.push(t3 - t0);
     summary = {
       densityLevel: level.densityLevel,
-      levelMethod: level.method,
+      densityLevelByCount: count.densityLevel,
       enclosed: level.enclosed,
       enclosedBySamples: level.enclosedBySamples,
-      gridTotal: level.gridTotal,
+      gridTotal: count.gridTotal,
       triangles: { positive: positive.triangleCount, negative: negative.triangleCount },
       vertices: { positive: positive.vertexCount, negative: negative.vertexCount },
     };
@@ -54,7 +59,8 @@ for (const { label, n, l, m } of STATES) {
     extent: grid.half,
     ms: {
       sample: round(median(times.sample)),
-      level: round(median(times.level)),
+      levelCount: round(median(times.levelCount)),
+      levelSubVoxel: round(median(times.levelSubVoxel)),
       mesh: round(median(times.mesh)),
       total: round(median(times.total)),
     },

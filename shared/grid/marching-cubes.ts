@@ -39,12 +39,10 @@ export interface MarchingCubesOptions {
 }
 
 // Per cube edge: the corner at its lower end (dx, dy, dz) and the axis it runs along.
-const EDGE_START: readonly (readonly [number, number, number])[] = [
-  [0, 0, 0], [1, 0, 0], [0, 1, 0], [0, 0, 0],
-  [0, 0, 1], [1, 0, 1], [0, 1, 1], [0, 0, 1],
-  [0, 0, 0], [1, 0, 0], [1, 1, 0], [0, 1, 0],
-];
-const EDGE_AXIS = [0, 1, 0, 1, 0, 1, 0, 1, 2, 2, 2, 2] as const;
+const EDGE_DX = Int8Array.of(0, 1, 0, 0, 0, 1, 0, 0, 0, 1, 1, 0);
+const EDGE_DY = Int8Array.of(0, 0, 1, 0, 0, 0, 1, 0, 0, 0, 1, 1);
+const EDGE_DZ = Int8Array.of(0, 0, 0, 0, 1, 1, 1, 1, 0, 0, 0, 0);
+const EDGE_AXIS = Int8Array.of(0, 1, 0, 1, 0, 1, 0, 1, 2, 2, 2, 2);
 
 export function marchingCubes(field: Float32Array, grid: GridSpec, options: MarchingCubesOptions): TriangleMesh {
   const { n } = grid;
@@ -70,16 +68,17 @@ export function marchingCubes(field: Float32Array, grid: GridSpec, options: Marc
   const gradA = new Float64Array(3);
   const gradB = new Float64Array(3);
 
-  // Gradient of sign·f at sample (i, j, k) into `out`.
+  // One component of ∇(sign·f) at sample p, index c along an axis of stride s: central difference
+  // inside, one-sided on the grid's faces.
+  const derivative = (p: number, c: number, s: number): number => {
+    if (c > 0 && c < n - 1) return (sign * (field[p + s] - field[p - s])) / (2 * h);
+    return c > 0 ? (sign * (field[p] - field[p - s])) / h : (sign * (field[p + s] - field[p])) / h;
+  };
   const gradient = (i: number, j: number, k: number, out: Float64Array): void => {
     const p = i + n * (j + n * k);
-    const ijk = [i, j, k];
-    for (let a = 0; a < 3; a++) {
-      const s = strides[a];
-      const lo = ijk[a] > 0 ? p - s : p;
-      const hi = ijk[a] < n - 1 ? p + s : p;
-      out[a] = (sign * (field[hi] - field[lo])) / (((hi - lo) / s) * h);
-    }
+    out[0] = derivative(p, i, 1);
+    out[1] = derivative(p, j, n);
+    out[2] = derivative(p, k, nn);
   };
 
   const makeVertex = (i: number, j: number, k: number, axis: number): number => {
@@ -136,7 +135,9 @@ export function marchingCubes(field: Float32Array, grid: GridSpec, options: Marc
 
         for (let e = 0; e < 12; e++) {
           if ((edges & (1 << e)) === 0) continue;
-          const [di, dj, dk] = EDGE_START[e];
+          const di = EDGE_DX[e];
+          const dj = EDGE_DY[e];
+          const dk = EDGE_DZ[e];
           const axis = EDGE_AXIS[e];
           const q = i + di + n * (j + dj);
           const cache = axis === 2 ? zMiddle : axis === 0 ? (dk ? xTop : xBottom) : dk ? yTop : yBottom;

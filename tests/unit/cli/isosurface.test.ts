@@ -53,6 +53,13 @@ describe('scripts/lobewright isosurface', () => {
     expect(answer.triangles.negative).toBe(answer.triangles.positive);
   });
 
+  it('passes reducedMass on: on a grid scaled by m_e/μ the level scales by (μ/m_e)³ (μ/m_e of ¹H, REFERENCE.md §1)', () => {
+    const mu = 0.9994556794247615; // CODATA 2022; the 2018 value differs by 2e-15
+    const fixed = run({ Z: 1, n: 2, l: 1, m: 0, grid: 64, extent: 12 }).answer;
+    const reduced = run({ Z: 1, n: 2, l: 1, m: 0, grid: 64, extent: 12 / mu, reducedMass: true }).answer;
+    expect(Math.abs(reduced.densityLevel / fixed.densityLevel / mu ** 3 - 1)).toBeLessThan(1e-6);
+  });
+
   it('refuses a grid above 256, naming "grid"', () => {
     const { status, answer } = run({ Z: 1, n: 2, l: 1, m: 0, basis: 'real', grid: 300 });
     expect(status).toBe(2);
