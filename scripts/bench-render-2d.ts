@@ -58,6 +58,19 @@ export const BENCH_SPECS: Record<string, FigureSpecInput> = {
     },
     print,
   },
+  'slice-3dz2-psi': {
+    schemaVersion: 1,
+    state: { terms: [{ n: 3, l: 2, m: 0 }] },
+    kind: { type: 'slice', plane: 'xz', quantity: 'psi', contours: { mode: 'enclosed', fractions: [0.5, 0.9] } },
+    print: { ...print, heightMm: 78 },
+  },
+  'slice-2s-density-angstrom': {
+    schemaVersion: 1,
+    system: { Z: 1, nucleus: 'infinite', lengthUnit: 'angstrom' },
+    state: { terms: [{ n: 2, l: 0, m: 0 }, { n: 2, l: 1, m: 0 }] },
+    kind: { type: 'slice', plane: 'xz', quantity: 'density', contours: { mode: 'levels', levels: [0.0005, 0.002] } },
+    print: { ...print, heightMm: 78 },
+  },
 };
 
 function resolve(input: FigureSpecInput): ResolvedFigureSpec {

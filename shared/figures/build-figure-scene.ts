@@ -5,6 +5,7 @@
  */
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
 import { buildRadialScene } from './build-radial-scene';
+import { buildSliceScene } from './build-slice-scene';
 import { FigureSpecError } from './figure-error';
 import type { FigureScene } from './scene';
 
@@ -12,6 +13,8 @@ export function buildFigureScene(spec: ResolvedFigureSpec): FigureScene {
   switch (spec.kind.type) {
     case 'radial':
       return buildRadialScene(spec);
+    case 'slice':
+      return buildSliceScene(spec);
     default:
       throw new FigureSpecError('kind.type', `"${spec.kind.type}" is not a 2D figure; draw it with the 3D renderer and build3dOverlay`);
   }
