@@ -125,4 +125,20 @@ describe('contours at an enclosed fraction', () => {
     // 2σ level error at n = 96 (enclosed-probability-level.ts) moves the radius by ≈ 0.006 bohr.
     for (const [u, v] of contours[0].lines[0].points) expect(Math.abs(Math.hypot(u, v) - 2.661160168917105)).toBeLessThan(0.02);
   });
+
+  it('draw signed 2p_z lines ψ = ±√c at the 3D 90 % level: one per lobe, meeting the z axis at the exact lobe length (mpmath, within 0.05 bohr)', () => {
+    const slice = sampleSlice(state2pz, { plane: 'xz', width: 201, height: 201, halfWidth: 12 });
+    const { levels, contours } = sliceContoursEnclosing(state2pz, slice, 'psi', [0.9], { n: 96, extent: 12 });
+    const [positive, negative] = contours;
+    expect(positive.level).toBe(levels[0].psiLevel);
+    expect(negative.level).toBe(-levels[0].psiLevel);
+    expect(positive.lines).toHaveLength(1);
+    expect(negative.lines).toHaveLength(1);
+    const top = Math.max(...positive.lines[0].points.map(([, v]) => v));
+    const bottom = Math.min(...negative.lines[0].points.map(([, v]) => v));
+    // zOuter = 9.1279 bohr (tests/unit/grid/fixtures/enclosed-probability-level.json, mpmath). Allowance:
+    // level error ≤ h²/3 = 2.1 % at h = 0.253 moves ψ by 1.1 %, the lobe tip by 1.1 %/|d ln ψ/dz| = 0.027 bohr.
+    expect(Math.abs(top - 9.127878299163143)).toBeLessThan(0.05);
+    expect(Math.abs(-bottom - 9.127878299163143)).toBeLessThan(0.05);
+  });
 });
