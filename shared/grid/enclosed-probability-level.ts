@@ -18,8 +18,9 @@
  * from the voxels the surface cuts, each counted wholly in or out. For a grid aligned with the
  * atom's symmetry these errors come in groups of up to 48 equal voxels and do not average away,
  * so the level's error fluctuates from grid to grid instead of falling smoothly. A random-error
- * estimate with groups of 48 gives, for a sphere of radius r, σ(c)/c ≈ 1.13 h²/r: about 1 % at
- * h = 0.2 bohr and 0.3 % at h = 0.1 bohr for the 1s 90 % surface (r = 2.66 bohr). The level is
+ * estimate with groups of 48 gives, for a sphere of radius r, σ(c)/c ≈ 1.13 h²/r: about 1.7 % at
+ * h = 0.2 bohr and 0.4 % at h = 0.1 bohr for the 1s 90 % surface (r = 2.66 bohr). Equal samples
+ * go in together, so `enclosed` can overshoot p by a whole group (up to 3 % at 48³ for 1s, p = 0.5). The level is
  * grid-limited; the measured errors are in tests/unit/grid/enclosed-probability-level.test.ts.
  * sub-voxel-level.ts sharpens this level (find-isosurface-levels.ts combines the two).
  */

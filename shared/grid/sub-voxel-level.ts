@@ -18,8 +18,8 @@
  * Accuracy: two second-order terms remain, the midpoint-rule bias of the samples inside
  * (≈ +h²/24·∮|∇d| dA of probability) and the curvature of the surface within a voxel; for 1s each
  * moves the level by about h²/6 relative. Measured for 1s (p = 0.5 and 0.9, half-widths 7 and
- * 8 bohr, h = 0.09–0.34 bohr): relative level errors 0.01–0.5 %, always below h²/3, against
- * 0.01–7 % for the sample count (tests/unit/grid/sub-voxel-level.test.ts). Near p → 1 the level
+ * 8 bohr, n = 48–192, h = 0.07–0.34 bohr): relative level errors 0.01–1.5 %, always below h²/3,
+ * against 0.002–6.9 % for the sample count (tests/unit/grid/sub-voxel-level.test.ts). Near p → 1 the level
  * also feels the quadrature error of the total (the 1s cusp at the nucleus), as the sample count
  * does. Cost: one more pass over the samples reading six neighbours, then ~10 sums over the band.
  */
