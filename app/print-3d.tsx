@@ -1,8 +1,10 @@
-// Print entry for 3D figures: renders one resolved spec with the viewer's own scene code into a
-// canvas of exactly the asked pixel size, then signals `data-figure-ready` (or `data-figure-error`)
-// on <html> and leaves the facts and the label projection in window.__LOBEWRIGHT_PRINT_RESULT__.
-// The job comes from window.__LOBEWRIGHT_PRINT__ (set before load) or from ?job=<url of JSON>.
-import { Component, useEffect, useRef, type ReactNode } from 'react';
+// Print entry for 3D figures: renders a resolved spec with the viewer's own scene code into a canvas
+// of exactly the asked pixel size, then sets `data-figure-ready="true"` (or `data-figure-error`) on
+// <html> and leaves the facts and the label projection in window.__LOBEWRIGHT_PRINT_RESULT__.
+// The first job comes from window.__LOBEWRIGHT_PRINT__ (set before load) or from ?job=<url of JSON>;
+// later jobs may be handed to window.__lobewrightPrint(job) on the same page, which keeps the WebGL
+// context and compiled shaders warm for batches. Geometry is computed here, on the main thread.
+import { Component, useEffect, useRef, useState, type ReactNode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { Canvas, useFrame, useThree } from '@react-three/fiber';
 import type { Camera } from 'three';
@@ -28,7 +30,7 @@ export interface PrintResult {
   facts: OrbitalFacts;
   notes: readonly string[];
   projection: PrintProjection;
-  /** Milliseconds for the geometry and from mounting to the drawn frame. */
+  /** Milliseconds for the geometry and from handing the scene to React to the drawn frame. */
   ms: { geometry: number; draw: number };
 }
 
@@ -36,6 +38,7 @@ declare global {
   interface Window {
     __LOBEWRIGHT_PRINT__?: PrintJob;
     __LOBEWRIGHT_PRINT_RESULT__?: PrintResult;
+    __lobewrightPrint?: (job: PrintJob) => Promise<PrintResult>;
     __lobewrightCapture?: () => string;
   }
 }
@@ -44,17 +47,23 @@ declare global {
 const CLOUD_DOT_MM = 0.22;
 const MAX_SIDE_PX = 8192;
 
-function fail(message: string): void {
-  document.documentElement.dataset.figureError = message;
+interface PreparedJob {
+  token: number;
+  spec: ResolvedFigureSpec;
+  geometry: OrbitalGeometry;
+  widthPx: number;
+  heightPx: number;
+  geometryMs: number;
+  startedAt: number;
+  done: (result: PrintResult) => void;
 }
 
-async function readJob(): Promise<PrintJob> {
-  if (window.__LOBEWRIGHT_PRINT__) return window.__LOBEWRIGHT_PRINT__;
-  const url = new URLSearchParams(location.search).get('job');
-  if (!url) throw new Error('no print job: set window.__LOBEWRIGHT_PRINT__ or pass ?job=<url>');
-  const response = await fetch(url);
-  if (!response.ok) throw new Error(`job: ${url} answered ${response.status}`);
-  return (await response.json()) as PrintJob;
+const html = document.documentElement;
+let showJob: ((job: PreparedJob) => void) | null = null;
+let nextToken = 1;
+
+function fail(message: string): void {
+  html.dataset.figureError = message;
 }
 
 function checkSide(value: unknown, field: string): number {
@@ -64,17 +73,82 @@ function checkSide(value: unknown, field: string): number {
   return value;
 }
 
-function ReadySignal({ onDrawn }: { onDrawn: (camera: Camera) => void }) {
+/** Draws a job: validates it, computes the geometry, hands the scene to React and resolves when the frame is drawn. */
+function print(job: PrintJob): Promise<PrintResult> {
+  delete html.dataset.figureReady;
+  delete html.dataset.figureError;
+  return new Promise<PrintResult>((resolve, reject) => {
+    try {
+      const widthPx = checkSide(job.widthPx, 'widthPx');
+      const heightPx = checkSide(job.heightPx, 'heightPx');
+      const parsed = figureSpecSchema.safeParse(job.spec);
+      if (!parsed.success) {
+        const issue = parsed.error.issues[0];
+        throw new Error(`spec.${issue.path.join('.')}: ${issue.message}`);
+      }
+      const spec = resolveFigureSpec(parsed.data, defaultHouseStyle);
+      document.body.style.background = spec.print.background === 'white' ? '#ffffff' : 'transparent';
+      const started = performance.now();
+      const geometry = buildOrbitalGeometry(spec);
+      const geometryMs = performance.now() - started;
+      if (!showJob) throw new Error('the print page is not ready');
+      showJob({
+        token: nextToken++,
+        spec,
+        geometry,
+        widthPx,
+        heightPx,
+        geometryMs,
+        startedAt: performance.now(),
+        done: (result) => {
+          window.__LOBEWRIGHT_PRINT_RESULT__ = result;
+          html.dataset.figureReady = 'true';
+          resolve(result);
+        },
+      });
+    } catch (error) {
+      const message = error instanceof Error ? error.message : String(error);
+      fail(message);
+      reject(new Error(message));
+    }
+  });
+}
+
+/** Waits for the first frame drawn at the job's exact size, then reports it (the canvas resizes a frame late). */
+function ReadySignal({ job }: { job: PreparedJob }) {
   const invalidate = useThree((s) => s.invalidate);
   const armed = useRef(true);
   useEffect(() => invalidate(), [invalidate]);
-  // useFrame runs just before the frame is drawn; the next animation frame comes after it.
   useFrame((state) => {
     if (!armed.current) return;
+    const canvas = state.gl.domElement;
+    if (state.size.width !== job.widthPx || state.size.height !== job.heightPx || canvas.width !== job.widthPx || canvas.height !== job.heightPx) {
+      state.invalidate();
+      return;
+    }
     armed.current = false;
-    requestAnimationFrame(() => onDrawn(state.camera));
+    // useFrame runs just before the frame is drawn; the next animation frame comes after it.
+    requestAnimationFrame(() => job.done(printResult(job, state.camera)));
   });
   return null;
+}
+
+function printResult(job: PreparedJob, camera: Camera): PrintResult {
+  const { spec, geometry, widthPx, heightPx } = job;
+  const pixelsPerBohr = pixelsPerBohrAtNucleus(camera as Parameters<typeof pixelsPerBohrAtNucleus>[0], heightPx);
+  return {
+    facts: geometry.facts,
+    notes: geometry.notes,
+    projection: {
+      widthPx,
+      heightPx,
+      pixelsPerBohr,
+      nucleus: projectToPixels(camera, [0, 0, 0], widthPx, heightPx),
+      axes: spec.look.showAxes ? axisEnds(geometry.radius).map((end, i) => ({ name: AXIS_NAMES[i], end: projectToPixels(camera, end, widthPx, heightPx) })) : [],
+      scaleBar: spec.look.showScaleBar && geometry.hasLength ? scaleBarLayout(pixelsPerBohr, widthPx, heightPx, spec.system.lengthUnit) : null,
+    },
+    ms: { geometry: job.geometryMs, draw: performance.now() - job.startedAt },
+  };
 }
 
 class PrintErrorBoundary extends Component<{ children: ReactNode }, { failed: boolean }> {
@@ -90,80 +164,69 @@ class PrintErrorBoundary extends Component<{ children: ReactNode }, { failed: bo
   }
 }
 
-interface PrintFigureProps {
-  spec: ResolvedFigureSpec;
-  geometry: OrbitalGeometry;
-  widthPx: number;
-  heightPx: number;
-  geometryMs: number;
-  /** performance.now() when the scene was handed to React. */
-  mountedAt: number;
-}
-
-function PrintFigure({ spec, geometry, widthPx, heightPx, geometryMs, mountedAt }: PrintFigureProps) {
-  const pxPerPt = spec.print.dpi / 72;
-  const onDrawn = (camera: Camera): void => {
-    const pixelsPerBohr = pixelsPerBohrAtNucleus(camera as Parameters<typeof pixelsPerBohrAtNucleus>[0], heightPx);
-    const projection: PrintProjection = {
-      widthPx,
-      heightPx,
-      pixelsPerBohr,
-      nucleus: projectToPixels(camera, [0, 0, 0], widthPx, heightPx),
-      axes: spec.look.showAxes ? axisEnds(geometry.radius).map((end, i) => ({ name: AXIS_NAMES[i], end: projectToPixels(camera, end, widthPx, heightPx) })) : [],
-      scaleBar: spec.look.showScaleBar && geometry.hasLength ? scaleBarLayout(pixelsPerBohr, widthPx, heightPx, spec.system.lengthUnit) : null,
+/** One canvas for every job of the page: the WebGL context and shader programs survive between figures. */
+function PrintApp() {
+  const [job, setJob] = useState<PreparedJob | null>(null);
+  useEffect(() => {
+    showJob = setJob;
+    return () => {
+      showJob = null;
     };
-    window.__LOBEWRIGHT_PRINT_RESULT__ = { facts: geometry.facts, notes: geometry.notes, projection, ms: { geometry: geometryMs, draw: performance.now() - mountedAt } };
-    document.documentElement.dataset.figureReady = 'true';
-  };
+  }, []);
+  if (!job) return null;
+  const { spec, geometry, widthPx, heightPx } = job;
+  const pxPerPt = spec.print.dpi / 72;
   return (
-    <Canvas
-      frameloop="demand"
-      flat
-      dpr={1}
-      gl={{ antialias: true, alpha: true, preserveDrawingBuffer: true }}
-      style={{ width: `${widthPx}px`, height: `${heightPx}px` }}
-      onCreated={({ gl }) => {
-        window.__lobewrightCapture = () => gl.domElement.toDataURL('image/png');
-      }}
-    >
-      {spec.print.background === 'white' ? <color attach="background" args={['#ffffff']} /> : null}
-      <OrbitalScene
-        geometry={geometry}
-        spec={spec}
-        domLabels={false}
-        lineWidthPx={spec.look.lineWidthPt * pxPerPt}
-        pointSizePx={Math.max(1, (CLOUD_DOT_MM / 25.4) * spec.print.dpi)}
-      />
-      <ReadySignal onDrawn={onDrawn} />
-    </Canvas>
+    <div style={{ width: `${widthPx}px`, height: `${heightPx}px` }}>
+      <Canvas
+        frameloop="demand"
+        flat
+        dpr={1}
+        resize={{ debounce: 0 }}
+        gl={{ antialias: true, alpha: true, preserveDrawingBuffer: true }}
+        onCreated={({ gl }) => {
+          window.__lobewrightCapture = () => gl.domElement.toDataURL('image/png');
+        }}
+      >
+        {spec.print.background === 'white' ? <color attach="background" args={['#ffffff']} /> : null}
+        <OrbitalScene
+          key={job.token}
+          geometry={geometry}
+          spec={spec}
+          domLabels={false}
+          lineWidthPx={spec.look.lineWidthPt * pxPerPt}
+          pointSizePx={Math.max(1, (CLOUD_DOT_MM / 25.4) * spec.print.dpi)}
+        />
+        <ReadySignal key={`ready-${job.token}`} job={job} />
+      </Canvas>
+    </div>
   );
 }
 
-async function main(): Promise<void> {
-  const job = await readJob();
-  const widthPx = checkSide(job.widthPx, 'widthPx');
-  const heightPx = checkSide(job.heightPx, 'heightPx');
-  const parsed = figureSpecSchema.safeParse(job.spec);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    throw new Error(`spec.${issue.path.join('.')}: ${issue.message}`);
-  }
-  const spec = resolveFigureSpec(parsed.data, defaultHouseStyle);
-  if (spec.print.background === 'white') document.body.style.background = '#ffffff';
-  const started = performance.now();
-  const geometry = buildOrbitalGeometry(spec);
-  const geometryMs = performance.now() - started;
-  const root = document.getElementById('root');
-  if (!root) throw new Error('print-3d.html must contain #root');
-  root.style.width = `${widthPx}px`;
-  root.style.height = `${heightPx}px`;
-  createRoot(root).render(
-    <PrintErrorBoundary>
-      <PrintFigure spec={spec} geometry={geometry} widthPx={widthPx} heightPx={heightPx} geometryMs={geometryMs} mountedAt={performance.now()} />
-    </PrintErrorBoundary>,
-  );
+async function firstJob(): Promise<PrintJob | null> {
+  if (window.__LOBEWRIGHT_PRINT__) return window.__LOBEWRIGHT_PRINT__;
+  const url = new URLSearchParams(location.search).get('job');
+  if (!url) return null;
+  const response = await fetch(url);
+  if (!response.ok) throw new Error(`job: ${url} answered ${response.status}`);
+  return (await response.json()) as PrintJob;
 }
 
 window.addEventListener('error', (event) => fail(event.message));
 window.addEventListener('unhandledrejection', (event) => fail(String((event.reason as Error)?.message ?? event.reason)));
-main().catch((error: unknown) => fail(error instanceof Error ? error.message : String(error)));
+
+const root = document.getElementById('root');
+if (!root) throw new Error('print-3d.html must contain #root');
+createRoot(root).render(
+  <PrintErrorBoundary>
+    <PrintApp />
+  </PrintErrorBoundary>,
+);
+window.__lobewrightPrint = async (job) => {
+  // The root mounts PrintApp asynchronously; wait for it before the first job.
+  while (!showJob) await new Promise((r) => setTimeout(r, 5));
+  return print(job);
+};
+firstJob()
+  .then((job) => (job ? window.__lobewrightPrint!(job) : null))
+  .catch((error: unknown) => fail(error instanceof Error ? error.message : String(error)));

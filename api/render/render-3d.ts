@@ -13,11 +13,12 @@ import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type Page } from 'playwright-core';
 import { AppError } from '../lib/app-error';
 import type { ResolvedFigureSpec } from '../../shared/spec/resolve-figure-spec';
 import type { OrbitalFacts } from '../../app/features/orbital-view/utils/orbital-geometry';
 import type { PrintProjection } from '../../app/features/orbital-view/utils/print-projection';
+import type { PrintJob } from '../../app/print-3d';
 
 export const CHROMIUM_PATH = '/usr/bin/chromium';
 const CHROMIUM_ARGS = [
@@ -54,8 +55,11 @@ export interface Render3dResult {
   notes: readonly string[];
   /** Pixel positions of the nucleus, axis ends and scale bar, for the vector labels. */
   projection: PrintProjection;
-  /** Milliseconds: browser start (0 when warm), page load to drawn frame, PNG capture, total. */
-  ms: { launch: number; draw: number; capture: number; total: number; geometry: number };
+  /**
+   * Milliseconds: browser start (0 when warm), print page load (0 when warm), geometry and drawing
+   * in the page (draw, of which geometry), PNG capture, total.
+   */
+  ms: { launch: number; page: number; draw: number; geometry: number; capture: number; total: number };
 }
 
 /** Pixels along one side: round(mm / 25.4 × dpi). */
@@ -118,13 +122,17 @@ function startStaticServer(root: string): Promise<{ server: Server; base: string
   });
 }
 
-// ---- the warm browser -----------------------------------------------------------------------
+// ---- the warm browser and page -------------------------------------------------------------
 
 interface Warm {
   browser: Browser;
   server: Server;
   base: string;
   root: string;
+  /** The print page, loaded once and handed one job after another (null until first use or after a failure). */
+  page: Page | null;
+  /** Jobs run one at a time on the page. */
+  queue: Promise<unknown>;
 }
 
 let warm: Promise<Warm> | null = null;
@@ -141,7 +149,7 @@ async function launch(root: string): Promise<Warm> {
       server.close();
       warm = null;
     });
-    return { browser, server, base, root };
+    return { browser, server, base, root, page: null, queue: Promise.resolve() };
   } catch (error) {
     server.close();
     throw new AppError(500, 'browser_failed', `Chromium did not start: ${(error as Error).message}`, undefined, { cause: error });
@@ -175,14 +183,27 @@ export async function closeRender3d(): Promise<void> {
 
 process.once('beforeExit', () => void closeRender3d());
 
-// ---- one figure -----------------------------------------------------------------------------
-
-interface PageResult {
-  facts: OrbitalFacts;
-  notes: string[];
-  projection: PrintProjection;
-  ms: { geometry: number; draw: number };
+async function printPage(w: Warm, widthPx: number, heightPx: number, timeoutMs: number, pageErrors: string[]): Promise<Page> {
+  if (w.page && !w.page.isClosed()) {
+    await w.page.setViewportSize({ width: widthPx, height: heightPx });
+    return w.page;
+  }
+  const context = await w.browser.newContext({ viewport: { width: widthPx, height: heightPx }, deviceScaleFactor: 1 });
+  const page = await context.newPage();
+  page.on('pageerror', (error) => pageErrors.push(error.message));
+  await page.goto(`${w.base}/print-3d.html`, { waitUntil: 'load', timeout: timeoutMs });
+  await page.waitForFunction(() => typeof window.__lobewrightPrint === 'function', null, { timeout: timeoutMs, polling: 10 });
+  w.page = page;
+  return page;
 }
+
+async function discardPage(w: Warm): Promise<void> {
+  const page = w.page;
+  w.page = null;
+  await page?.context().close().catch(() => undefined);
+}
+
+// ---- one figure -----------------------------------------------------------------------------
 
 export async function render3dPng(spec: ResolvedFigureSpec, opts: Render3dOptions = {}): Promise<Render3dResult> {
   const started = performance.now();
@@ -191,59 +212,58 @@ export async function render3dPng(spec: ResolvedFigureSpec, opts: Render3dOption
   }
   const { widthPx, heightPx } = checkSize(spec);
   const timeoutMs = opts.timeoutMs ?? DEFAULT_TIMEOUT_MS;
-  const job = {
+  const job: PrintJob = {
     spec: opts.background ? { ...spec, print: { ...spec.print, background: opts.background } } : spec,
     widthPx,
     heightPx,
   };
   const { warm: w, launchMs } = await warmBrowser(path.resolve(opts.distDir ?? DEFAULT_DIST));
-  const context = await w.browser.newContext({ viewport: { width: widthPx, height: heightPx }, deviceScaleFactor: 1 });
-  const pageErrors: string[] = [];
-  let timer: NodeJS.Timeout | undefined;
-  try {
-    const page = await context.newPage();
-    page.on('pageerror', (error) => pageErrors.push(error.message));
-    await page.addInitScript((j) => {
-      (window as unknown as { __LOBEWRIGHT_PRINT__: unknown }).__LOBEWRIGHT_PRINT__ = j;
-    }, job);
-    const work = (async () => {
-      const loadStarted = performance.now();
-      await page.goto(`${w.base}/print-3d.html`, { waitUntil: 'load', timeout: timeoutMs });
-      await page.waitForFunction(() => document.documentElement.dataset.figureReady === 'true' || document.documentElement.dataset.figureError !== undefined, null, {
-        timeout: timeoutMs,
-        polling: 20,
+  const run = async (): Promise<Render3dResult> => {
+    const pageErrors: string[] = [];
+    let timer: NodeJS.Timeout | undefined;
+    try {
+      const work = (async () => {
+        const pageStarted = performance.now();
+        const page = await printPage(w, widthPx, heightPx, timeoutMs, pageErrors);
+        const drawStarted = performance.now();
+        const pageMs = drawStarted - pageStarted;
+        const result = await page.evaluate((j) => window.__lobewrightPrint!(j), job).catch((error: Error) => {
+          const message = error.message.replace(/^page\.evaluate: (Error: )?/, '').split('\n')[0];
+          throw new AppError(422, 'render_failed', `the 3D figure could not be drawn: ${message}`);
+        });
+        const drawMs = performance.now() - drawStarted;
+        const captureStarted = performance.now();
+        const dataUrl = await page.evaluate(() => window.__lobewrightCapture!());
+        const png = Buffer.from(dataUrl.slice(dataUrl.indexOf(',') + 1), 'base64');
+        return { png, result, pageMs, drawMs, captureMs: performance.now() - captureStarted };
+      })();
+      const timeout = new Promise<never>((_, reject) => {
+        timer = setTimeout(() => reject(new AppError(504, 'render_timeout', `the 3D figure took longer than ${timeoutMs} ms to render`)), timeoutMs);
       });
-      const failure = await page.evaluate(() => document.documentElement.dataset.figureError ?? null);
-      if (failure !== null) throw new AppError(422, 'render_failed', `the 3D figure could not be drawn: ${failure}`);
-      const drawMs = performance.now() - loadStarted;
-      const captureStarted = performance.now();
-      const dataUrl = await page.evaluate(() => (window as unknown as { __lobewrightCapture: () => string }).__lobewrightCapture());
-      const result = await page.evaluate(() => (window as unknown as { __LOBEWRIGHT_PRINT_RESULT__: unknown }).__LOBEWRIGHT_PRINT_RESULT__ as PageResult);
-      const png = Buffer.from(dataUrl.slice(dataUrl.indexOf(',') + 1), 'base64');
-      return { png, result, drawMs, captureMs: performance.now() - captureStarted };
-    })();
-    const timeout = new Promise<never>((_, reject) => {
-      timer = setTimeout(() => reject(new AppError(504, 'render_timeout', `the 3D figure took longer than ${timeoutMs} ms to render`)), timeoutMs);
-    });
-    const { png, result, drawMs, captureMs } = await Promise.race([work, timeout]);
-    checkPng(png, widthPx, heightPx);
-    return {
-      png,
-      widthPx,
-      heightPx,
-      facts: result.facts,
-      notes: result.notes,
-      projection: result.projection,
-      ms: { launch: launchMs, draw: drawMs, capture: captureMs, total: performance.now() - started, geometry: result.ms.geometry },
-    };
-  } catch (error) {
-    if (error instanceof AppError) throw error;
-    const detail = pageErrors.length > 0 ? ` (page: ${pageErrors.join('; ')})` : '';
-    throw new AppError(500, 'render_failed', `the 3D figure could not be rendered: ${(error as Error).message}${detail}`, undefined, { cause: error });
-  } finally {
-    clearTimeout(timer);
-    await context.close().catch(() => undefined);
-  }
+      const { png, result, pageMs, drawMs, captureMs } = await Promise.race([work, timeout]);
+      checkPng(png, widthPx, heightPx);
+      return {
+        png,
+        widthPx,
+        heightPx,
+        facts: result.facts,
+        notes: result.notes,
+        projection: result.projection,
+        ms: { launch: launchMs, page: pageMs, draw: drawMs, geometry: result.ms.geometry, capture: captureMs, total: performance.now() - started },
+      };
+    } catch (error) {
+      // A page that failed or timed out may be in any state: the next figure gets a fresh one.
+      await discardPage(w);
+      if (error instanceof AppError) throw error;
+      const detail = pageErrors.length > 0 ? ` (page: ${pageErrors.join('; ')})` : '';
+      throw new AppError(500, 'render_failed', `the 3D figure could not be rendered: ${(error as Error).message}${detail}`, undefined, { cause: error });
+    } finally {
+      clearTimeout(timer);
+    }
+  };
+  const done = w.queue.then(run, run);
+  w.queue = done.catch(() => undefined);
+  return done;
 }
 
 /** The PNG's IHDR must say exactly the size asked for. */

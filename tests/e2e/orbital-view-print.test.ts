@@ -105,6 +105,17 @@ describe('render3dPng', () => {
     expect((scaleBar!.to[0] - scaleBar!.from[0]) / result.projection.pixelsPerBohr).toBeCloseTo(scaleBar!.lengthBohr, 9);
   });
 
+  it('when figures of different sizes follow each other on the warm page, then each PNG has its own exact size', async () => {
+    // round(30 / 25.4 × 300) = 354, round(20 / 25.4 × 300) = 236; then back to 236 × 236.
+    const wide = await render3dPng(spec({ kind: { type: 'cloud', points: 2000, seed: 5 }, print: { widthMm: 30, heightMm: 20, dpi: 300 } }));
+    const wideImage = await pixels(wide.png);
+    expect([wideImage.width, wideImage.height]).toEqual([354, 236]);
+    expect(wide.projection.nucleus[0]).toBeCloseTo(177, 6);
+    expect(wide.projection.nucleus[1]).toBeCloseTo(118, 6);
+    const square = await pixels((await render3dPng(spec())).png);
+    expect([square.width, square.height]).toEqual([236, 236]);
+  });
+
   it('when the figure would exceed the size limit or is not a 3D kind, then a clear error names the field', async () => {
     const tooLarge = spec({ print: { widthMm: 500, heightMm: 40, dpi: 1200 } });
     await expect(render3dPng(tooLarge)).rejects.toMatchObject({ code: 'figure_too_large', fields: { 'print.widthMm': expect.stringContaining('23622 px') } });
