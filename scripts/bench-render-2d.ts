@@ -71,6 +71,24 @@ export const BENCH_SPECS: Record<string, FigureSpecInput> = {
     kind: { type: 'slice', plane: 'xz', quantity: 'density', contours: { mode: 'levels', levels: [0.0005, 0.002] } },
     print: { ...print, heightMm: 78 },
   },
+  'levels-h1-balmer': {
+    schemaVersion: 1,
+    system: { Z: 1, nucleus: 'H-1', lengthUnit: 'bohr' },
+    state: { terms: [{ n: 1, l: 0, m: 0 }] },
+    kind: {
+      type: 'levels',
+      nMax: 6,
+      transitions: [
+        { upper: 2, lower: 1 },
+        { upper: 3, lower: 1 },
+        { upper: 3, lower: 2 },
+        { upper: 4, lower: 2 },
+        { upper: 5, lower: 2 },
+        { upper: 4, lower: 3 },
+      ],
+    },
+    print: { ...print, heightMm: 70 },
+  },
 };
 
 function resolve(input: FigureSpecInput): ResolvedFigureSpec {

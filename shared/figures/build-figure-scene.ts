@@ -4,6 +4,7 @@
  * vector overlay comes from build3dOverlay.
  */
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
+import { buildLevelsScene } from './build-levels-scene';
 import { buildRadialScene } from './build-radial-scene';
 import { buildSliceScene } from './build-slice-scene';
 import { FigureSpecError } from './figure-error';
@@ -15,6 +16,8 @@ export function buildFigureScene(spec: ResolvedFigureSpec): FigureScene {
       return buildRadialScene(spec);
     case 'slice':
       return buildSliceScene(spec);
+    case 'levels':
+      return buildLevelsScene(spec);
     default:
       throw new FigureSpecError('kind.type', `"${spec.kind.type}" is not a 2D figure; draw it with the 3D renderer and build3dOverlay`);
   }
