@@ -7,6 +7,8 @@ import { physicsToThree } from '../../../../shared/physics/coordinates';
 export const AXIS_NAMES = ['x', 'y', 'z'] as const;
 /** Axis half-length as a multiple of the figure's radius. */
 export const AXIS_REACH = 1.15;
+/** Labels sit a little beyond the axis ends so the line does not run through them. */
+const LABEL_OFFSET = 1.07;
 
 /** Positive end of each physics axis in the three.js frame. */
 export function axisEnds(radius: number): [number, number, number][] {
@@ -29,8 +31,8 @@ export function Axes({ radius, colour, lineWidthPx, labels }: { radius: number; 
       <Line points={points} segments color={colour} lineWidth={lineWidthPx} />
       {labels
         ? ends.map((end, i) => (
-            <Html key={AXIS_NAMES[i]} position={end} center style={{ pointerEvents: 'none' }}>
-              <span className="text-sm italic text-slate-700">{AXIS_NAMES[i]}</span>
+            <Html key={AXIS_NAMES[i]} position={[end[0] * LABEL_OFFSET, end[1] * LABEL_OFFSET, end[2] * LABEL_OFFSET]} center style={{ pointerEvents: 'none' }}>
+              <span className="font-serif text-base italic text-slate-800 [text-shadow:0_0_3px_white,0_0_3px_white]">{AXIS_NAMES[i]}</span>
             </Html>
           ))
         : null}
