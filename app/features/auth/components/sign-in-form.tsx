@@ -29,6 +29,8 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         type="email"
         name="email"
         autoComplete="username"
+        // The page exists only for this form, so typing can start at once.
+        autoFocus
         required
         value={email}
         onChange={(e) => setEmail(e.target.value)}

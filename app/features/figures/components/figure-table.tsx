@@ -105,7 +105,7 @@ export function FigureTable({ figures }: { figures: FigureSummary[] }) {
       </div>
 
       <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
-        <table className="w-full border-collapse text-sm">
+        <table className="w-full min-w-[46rem] border-collapse text-sm">
           <caption className="sr-only">
             Figures in this project; column headers sort the table
           </caption>
