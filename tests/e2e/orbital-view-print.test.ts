@@ -116,6 +116,25 @@ describe('render3dPng', () => {
     expect([square.width, square.height]).toEqual([236, 236]);
   });
 
+  it('when a cloud and an angular surface are printed, then the facts say what was drawn and the angular plot has no scale bar', async () => {
+    const cloud = await render3dPng(spec({ kind: { type: 'cloud', points: 5000, seed: 9 }, look: { showScaleBar: true } }));
+    expect(cloud.facts.points).toBe(5000);
+    // One term: nothing is rejected (shared/sampling/sample-cloud.ts).
+    expect(cloud.facts.acceptance).toBe(1);
+    expect(cloud.projection.scaleBar).not.toBeNull();
+    const cloudImage = await pixels(cloud.png);
+    expect(cloudImage.at(2, 2)[3]).toBe(0);
+    const angular = await render3dPng(spec({ kind: { type: 'angular' }, look: { showScaleBar: true } }));
+    expect(angular.projection.scaleBar).toBeNull();
+    expect(angular.notes.join(' ')).toMatch(/no scale bar/);
+    // Seen along y the p_z polar surface is two touching circles: +phase above, −phase below the nucleus.
+    const image = await pixels(angular.png);
+    const [nx, ny] = angular.projection.nucleus;
+    const lobe = 0.5 * Math.sqrt(3 / (4 * Math.PI)) * angular.projection.pixelsPerBohr; // centre of the upper circle, |S_10| max = √(3/4π)
+    expectColour(image.at(nx, ny - lobe), POSITIVE, 'angular, upper lobe');
+    expectColour(image.at(nx, ny + lobe), NEGATIVE, 'angular, lower lobe');
+  });
+
   it('when the figure would exceed the size limit or is not a 3D kind, then a clear error names the field', async () => {
     const tooLarge = spec({ print: { widthMm: 500, heightMm: 40, dpi: 1200 } });
     await expect(render3dPng(tooLarge)).rejects.toMatchObject({ code: 'figure_too_large', fields: { 'print.widthMm': expect.stringContaining('23622 px') } });
