@@ -135,6 +135,14 @@ describe('render3dPng', () => {
     expectColour(image.at(nx, ny + lobe), NEGATIVE, 'angular, lower lobe');
   });
 
+  it('when the same spec is printed twice, then the PNG bytes are identical', async () => {
+    const cloudSpec = spec({ kind: { type: 'cloud', points: 3000, seed: 4 }, look: { showAxes: true, showScaleBar: true } });
+    const first = await render3dPng(cloudSpec);
+    await render3dPng(spec());
+    const second = await render3dPng(cloudSpec);
+    expect(first.png.equals(second.png)).toBe(true);
+  });
+
   it('when the figure would exceed the size limit or is not a 3D kind, then a clear error names the field', async () => {
     const tooLarge = spec({ print: { widthMm: 500, heightMm: 40, dpi: 1200 } });
     await expect(render3dPng(tooLarge)).rejects.toMatchObject({ code: 'figure_too_large', fields: { 'print.widthMm': expect.stringContaining('23622 px') } });

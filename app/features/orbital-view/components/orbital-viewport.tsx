@@ -21,6 +21,31 @@ export interface OrbitalViewportProps {
 
 const VIEWPORT_LINE_PX = 1.5;
 const VIEWPORT_POINT_PX = 2;
+/** Keyboard steps: degrees per arrow key, zoom factor per + or −. */
+const KEY_TURN_DEG = 15;
+const KEY_ZOOM = 1.25;
+
+/** The view after a key press on the figure, or null for keys the figure does not use. */
+function viewAfterKey(view: ViewSettings, key: string): ViewSettings | null {
+  const wrap = (deg: number): number => ((((deg + 180) % 360) + 360) % 360) - 180;
+  switch (key) {
+    case 'ArrowLeft':
+      return { ...view, azimuthDeg: wrap(view.azimuthDeg - KEY_TURN_DEG) };
+    case 'ArrowRight':
+      return { ...view, azimuthDeg: wrap(view.azimuthDeg + KEY_TURN_DEG) };
+    case 'ArrowUp':
+      return { ...view, elevationDeg: Math.min(90, view.elevationDeg + KEY_TURN_DEG) };
+    case 'ArrowDown':
+      return { ...view, elevationDeg: Math.max(-90, view.elevationDeg - KEY_TURN_DEG) };
+    case '+':
+    case '=':
+      return { ...view, zoom: Math.min(10, Math.round(view.zoom * KEY_ZOOM * 1000) / 1000) };
+    case '-':
+      return { ...view, zoom: Math.max(0.1, Math.round((view.zoom / KEY_ZOOM) * 1000) / 1000) };
+    default:
+      return null;
+  }
+}
 
 function ViewControls({ view, radius, onEnd }: { view: ViewSettings; radius: number; onEnd: (v: ViewSettings) => void }) {
   const size = useThree((s) => s.size);
@@ -62,7 +87,18 @@ export function OrbitalViewport({ spec, onViewChange, className }: OrbitalViewpo
 
   return (
     <div className={className ?? 'flex flex-col gap-3 lg:flex-row'}>
-      <div className="relative aspect-square w-full max-w-[640px] rounded border border-slate-200 bg-white">
+      <div
+        className="relative aspect-square w-full max-w-[640px] rounded border border-slate-200 bg-white focus-visible:outline-2 focus-visible:outline-slate-600"
+        tabIndex={0}
+        role="group"
+        aria-label="3D figure: arrow keys turn it, + and − zoom"
+        onKeyDown={(event) => {
+          const next = viewAfterKey(view, event.key);
+          if (!next) return;
+          event.preventDefault();
+          changeView(next);
+        }}
+      >
         <Canvas
           frameloop="demand"
           flat

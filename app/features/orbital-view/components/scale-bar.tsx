@@ -61,7 +61,7 @@ export function ScaleBar({ unit, colour, lineWidthPx, domLabel, onLayout }: Scal
       <Line points={BAR_POINTS} segments color={colour} lineWidth={lineWidthPx} depthTest={false} renderOrder={10} />
       {domLabel && label ? (
         <Html position={[0.5, 3, 0]} center style={{ pointerEvents: 'none' }}>
-          <span className="whitespace-nowrap text-xs text-slate-700">{label}</span>
+          <span className="whitespace-nowrap text-xs text-slate-800 [text-shadow:0_0_3px_white,0_0_3px_white]">{label}</span>
         </Html>
       ) : null}
     </group>
