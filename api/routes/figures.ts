@@ -8,10 +8,18 @@ import { currentUser, requireUser } from '../middleware/require-user';
 import { validated } from '../middleware/validate';
 import { findFigure, findRevision, listRevisions } from '../repositories/figures';
 import { deleteFigure, duplicateFigure, updateFigure } from '../services/figures';
+import { renderFormats } from '../render/render-figure';
+import { renderStoredFigure } from '../services/render-service';
 import { authoriseFigure } from '../services/project-access';
 
 const figureParams = z.object({ figureId: idParam });
 const revisionParams = z.object({ figureId: idParam, revision: idParam });
+const renderQuery = z.object({
+  format: z.enum(renderFormats),
+  revision: idParam.optional(),
+  cmyk: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  download: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+});
 
 export function figureRoutes(db: Knex): Router {
   const r = Router();
@@ -49,6 +57,28 @@ export function figureRoutes(db: Knex): Router {
       await authoriseFigure(db, currentUser(req), params.figureId, 'edit');
       await deleteFigure(db, params.figureId);
       res.status(204).end();
+    }),
+  );
+
+  r.get(
+    '/:figureId/render',
+    validated({ params: figureParams, query: renderQuery }, async ({ params, query }, req, res) => {
+      await authoriseFigure(db, currentUser(req), params.figureId, 'read');
+      const file = await renderStoredFigure(db, params.figureId, query.revision, query.format, query.cmyk);
+      res.set({
+        'Content-Type': file.contentType,
+        'Content-Disposition': `${query.download ? 'attachment' : 'inline'}; filename="${file.filename}"`,
+        ETag: `"${file.key}"`,
+        'Cache-Control': 'private, max-age=0, must-revalidate',
+        // Cautions travel with the file (ASCII-safe JSON), for clients that show them.
+        'X-Lobewright-Notes': encodeURIComponent(JSON.stringify(file.notes)),
+        'X-Lobewright-Cache': file.fromCache ? 'hit' : 'miss',
+      });
+      if (req.get('if-none-match') === `"${file.key}"`) {
+        res.status(304).end();
+        return;
+      }
+      res.send(file.bytes);
     }),
   );
 

@@ -46,6 +46,12 @@ export class ApiClient {
     return { status: res.status, body: parsed, headers: res.headers };
   }
 
+  /** GET a binary body (rendered files). */
+  async getBytes(path: string): Promise<{ status: number; bytes: Buffer; headers: Headers }> {
+    const res = await fetch(this.baseUrl + path, { headers: this.cookie ? { cookie: this.cookie } : {} });
+    return { status: res.status, bytes: Buffer.from(await res.arrayBuffer()), headers: res.headers };
+  }
+
   async refreshSession(): Promise<Reply> {
     return this.request('GET', '/api/auth/session');
   }
