@@ -2,7 +2,7 @@
  * The main thread's side of the geometry worker: one worker, results cached per spec (canonical
  * JSON of what the geometry depends on), and cancellation: a request for another figure while one
  * is being computed terminates the busy worker (its work is synchronous and cannot be interrupted
- * otherwise) and starts a fresh one.
+ * otherwise) and starts a fresh one; a request for the figure already being computed joins it.
  */
 import { canonicalJson } from '../../../../shared/spec/canonical-json';
 import type { GeometrySpec } from '../utils/build-orbital-geometry';
@@ -24,9 +24,11 @@ export function geometryKey(spec: GeometrySpec): string {
 interface Pending {
   id: number;
   key: string;
+  promise: Promise<OrbitalGeometry>;
   resolve: (g: OrbitalGeometry) => void;
   reject: (e: Error) => void;
-  onProgress: (fraction: number, stage: string) => void;
+  /** Everyone waiting for this figure (a second request for the same figure joins the first). */
+  listeners: Set<(fraction: number, stage: string) => void>;
 }
 
 const cache = new Map<string, OrbitalGeometry>();
@@ -40,7 +42,7 @@ function startWorker(): Worker {
     const message = event.data;
     if (!pending || message.id !== pending.id) return;
     if (message.type === 'progress') {
-      pending.onProgress(message.fraction, message.stage);
+      for (const listener of pending.listeners) listener(message.fraction, message.stage);
       return;
     }
     const done = pending;
@@ -77,6 +79,10 @@ export function requestGeometry(spec: GeometrySpec, onProgress: (fraction: numbe
     remember(key, hit);
     return Promise.resolve(hit);
   }
+  if (pending && pending.key === key) {
+    pending.listeners.add(onProgress);
+    return pending.promise;
+  }
   if (pending) {
     const superseded = pending;
     pending = null;
@@ -86,9 +92,14 @@ export function requestGeometry(spec: GeometrySpec, onProgress: (fraction: numbe
   }
   worker ??= startWorker();
   const id = nextId++;
-  return new Promise<OrbitalGeometry>((resolve, reject) => {
-    pending = { id, key, resolve, reject, onProgress };
-    const request: GeometryRequest = { id, spec: { system: spec.system, state: spec.state, kind: spec.kind, look: spec.look } };
-    worker!.postMessage(request);
+  let resolve!: (g: OrbitalGeometry) => void;
+  let reject!: (e: Error) => void;
+  const promise = new Promise<OrbitalGeometry>((yes, no) => {
+    resolve = yes;
+    reject = no;
   });
+  pending = { id, key, promise, resolve, reject, listeners: new Set([onProgress]) };
+  const request: GeometryRequest = { id, spec: { system: spec.system, state: spec.state, kind: spec.kind, look: spec.look } };
+  worker.postMessage(request);
+  return promise;
 }
