@@ -8,6 +8,7 @@ const commands: Record<string, () => Promise<{ default: CliCommand }>> = {
   ylm: () => import('./commands/ylm'),
   props: () => import('./commands/props'),
   isosurface: () => import('./commands/isosurface'),
+  render: () => import('./commands/render'),
 };
 
 function fail(field: string, message: string, code = 'bad_request'): never {
@@ -29,7 +30,9 @@ async function main(): Promise<void> {
   const command = (await commands[name]()).default;
   try {
     const answer = await command(request);
-    process.stdout.write(JSON.stringify(answer) + '\n');
+    // A command may answer with file bytes (render without "out"): they go to stdout as they are.
+    if (answer instanceof Uint8Array) process.stdout.write(answer);
+    else process.stdout.write(JSON.stringify(answer) + '\n');
   } catch (err) {
     if (err instanceof CliError) fail(err.field, err.message, err.code);
     throw err;
