@@ -1,0 +1,32 @@
+/**
+ * Number of bound levels of angular momentum l of a short-range potential, from the zero-energy
+ * solution: its nodes on the grid plus one more if it is heading for a node beyond the grid.
+ *
+ * Source: the oscillation theorem at threshold (the zero-energy regular solution has as many nodes
+ * as there are bound levels) and REFERENCE.md §10.5's definition of the critical point: beyond the
+ * range of V the zero-energy solution is u = A r^{l+1} + B r^{−l}, and a level appears where A = 0.
+ * A node lies beyond the last point exactly when A and u there have opposite signs, i.e. when
+ * r u'/u + l < 0, i.e. (with u = r^{1/2} y, x = ln r) y'/y < −(l + ½).
+ * Potentials with a Coulomb tail or confining ones have infinitely many levels (Infinity).
+ * Tabulated potentials without a tail: the levels below V at the last point, on the table.
+ * Accuracy: that of the Numerov discretisation, O(h⁴) in the critical parameters.
+ */
+import { OrbitalInputError } from '../physics/orbital-input-error';
+import { radialSystem } from './radial-system';
+import { sweepOutward } from './numerov-shooting';
+import type { Potential } from './potential';
+
+export function countBoundLevels(potential: Potential, l: number, mu: number, step: number): number {
+  const { threshold, tailCharge } = potential.asymptotes;
+  if (!Number.isFinite(threshold) || tailCharge > 0) return Infinity;
+  // Twice the range, so that the last three points lie where V is negligible (and clear of a jump at a).
+  const rEnd = potential.outerLimit ?? 2 * (potential.rangeEnd ?? Number.NaN);
+  if (!(rEnd > 0)) throw new OrbitalInputError('potential', 'has neither a range nor a Coulomb tail');
+  const s = radialSystem(potential, l, mu, rEnd, step);
+  const nodes = sweepOutward(s, threshold);
+  if (potential.outerLimit !== undefined) return nodes;
+  const y = s.yOut;
+  const n = y.length;
+  const logSlope = (y[n - 1] - y[n - 3]) / (2 * step * y[n - 2]);
+  return nodes + (logSlope < -(l + 0.5) ? 1 : 0);
+}

@@ -1,0 +1,77 @@
+/**
+ * The lowest levels of one shooting system: Sturm bisection on the node count brackets each level,
+ * then Newton steps from the matching mismatch (energyCorrection) converge inside the bracket.
+ *
+ * Source: P. Giannozzi, "Numerical Methods in Quantum Mechanics", ch. 2 (bisection on the node
+ * count combined with the perturbative energy update; from memory); the bracket from the Sturm
+ * oscillation theorem is common practice (e.g. Koonin & Meredith, Computational Physics, §3.2).
+ * Every count narrows the brackets of all levels at once, and a Newton step that leaves its
+ * bracket is replaced by bisection, so the search cannot lose or swap a level.
+ */
+import {
+  energyCorrection,
+  matchedState,
+  sweepOutward,
+  type GridState,
+  type ShootingSystem,
+} from './numerov-shooting';
+
+const MAX_ITERATIONS = 300;
+/** Relative size of the last Newton step that counts as converged (near round-off of the mismatch). */
+const RELATIVE_TOLERANCE = 1e-14;
+
+export interface GridLevel extends GridState {
+  energy: number;
+}
+
+export interface LevelBrackets {
+  lo: number[];
+  hi: number[];
+}
+
+/** Brackets for levels 0 … count−1 between a lower bound (no level below) and an upper bound. */
+export function levelBrackets(count: number, lower: number, upper: number): LevelBrackets {
+  return { lo: new Array<number>(count).fill(lower), hi: new Array<number>(count).fill(upper) };
+}
+
+/** Counts the levels below E and narrows every bracket with the answer. */
+export function countLevelsBelow(s: ShootingSystem, E: number, b: LevelBrackets): number {
+  const c = sweepOutward(s, E);
+  for (let k = 0; k < b.lo.length; k++) {
+    if (k < c) b.hi[k] = Math.min(b.hi[k], E);
+    else b.lo[k] = Math.max(b.lo[k], E);
+  }
+  return c;
+}
+
+/** Level k (k nodes) inside its bracket; `guess` (e.g. from a coarser grid) starts the search. */
+export function findLevel(
+  s: ShootingSystem,
+  k: number,
+  b: LevelBrackets,
+  guess?: number,
+): GridLevel {
+  let E = guess !== undefined && guess > b.lo[k] && guess < b.hi[k] ? guess : 0.5 * (b.lo[k] + b.hi[k]);
+  for (let iter = 0; iter < MAX_ITERATIONS; iter++) {
+    const c = countLevelsBelow(s, E, b);
+    const scale = Math.max(Math.abs(E), 1e-12);
+    if (c === k || c === k + 1) {
+      const dE = energyCorrection(s, E);
+      if (Number.isFinite(dE)) {
+        if (Math.abs(dE) <= RELATIVE_TOLERANCE * scale) return { energy: E, ...matchedState(s) };
+        const next = E + dE;
+        if (next > b.lo[k] && next < b.hi[k]) {
+          E = next;
+          continue;
+        }
+      }
+    }
+    if (b.hi[k] - b.lo[k] <= RELATIVE_TOLERANCE * scale) break;
+    E = 0.5 * (b.lo[k] + b.hi[k]);
+  }
+  // The bracket has shrunk to round-off without a clean Newton finish: take its middle.
+  E = 0.5 * (b.lo[k] + b.hi[k]);
+  sweepOutward(s, E);
+  energyCorrection(s, E);
+  return { energy: E, ...matchedState(s) };
+}
