@@ -133,11 +133,7 @@ function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
       </div>
       <div className="mt-6">
         <Panel id="revisions-title" title="Revisions">
-          <RevisionList
-            figureId={figure.id}
-            currentRevision={figure.revision}
-            approvedRevision={figure.approvedRevision}
-          />
+          <RevisionList figure={figure} canEdit={canEdit} />
         </Panel>
       </div>
     </>

@@ -86,4 +86,21 @@ describe('two editors saving the same figure', () => {
     await ravi.getByText('Editing on top of revision 3').waitFor();
     expect(problems).toEqual([]);
   });
+
+  it('when the editor opens revision 1, then it names what differs and restoring it makes revision 4', async () => {
+    const revisions = ravi.getByRole('region', { name: 'Revisions' });
+    await revisions.getByRole('button', { name: 'Show revision 1' }).click();
+    await revisions
+      .getByText('Differs from the latest revision (3) in: caption, alt text.')
+      .waitFor();
+    await revisions.getByRole('button', { name: 'Restore revision 1' }).click();
+    await revisions.getByText('Revision 1 restored as revision 4.').waitFor();
+    expect(await ravi.getByLabel('Caption').inputValue()).toBe(
+      'Surface enclosing 90 % of the probability of the hydrogen 1s orbital.',
+    );
+    expect(await ravi.getByLabel('Alt text').inputValue()).toBe('');
+    await revisions.getByRole('cell', { name: 'Restored revision 1' }).waitFor();
+    await saveScreenshot(ravi, 'revision-restored');
+    expect(problems).toEqual([]);
+  });
 });

@@ -142,7 +142,11 @@ export function CreateFigureForm({ projectId, onCreated, onCancel }: CreateFigur
 
   function onSubmit(event: FormEvent) {
     event.preventDefault();
-    submit({ title, number, spec: buildQuickSpec(kind, state) }, onCreated);
+    // A blank number is left out: the schema only accepts a number that is there.
+    submit(
+      { title, number: number.trim() || undefined, spec: buildQuickSpec(kind, state) },
+      onCreated,
+    );
   }
 
   return (

@@ -1,19 +1,20 @@
 // Every saved revision of a figure, newest first, with who saved it, when and their note.
-// A revision can be opened to read what it held.
+// A revision can be opened to read what it held, compare it with the latest and restore it.
 import { Fragment, useEffect, useRef, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { ErrorPanel, Loading } from '../../../components/ui/status';
 import { formatDateTime } from '../../../utils/format-date';
 import { useRevisions } from '../api/get-revisions';
+import type { Figure } from '../../../../shared/api/schemas';
 import { RevisionDetails } from './revision-details';
 
 interface RevisionListProps {
-  figureId: number;
-  currentRevision: number;
-  approvedRevision: number | null;
+  figure: Figure;
+  canEdit: boolean;
 }
 
-export function RevisionList({ figureId, currentRevision, approvedRevision }: RevisionListProps) {
+export function RevisionList({ figure, canEdit }: RevisionListProps) {
+  const { id: figureId, revision: currentRevision, approvedRevision } = figure;
   const revisions = useRevisions(figureId);
   const [open, setOpen] = useState<number | null>(null);
 
@@ -32,6 +33,7 @@ export function RevisionList({ figureId, currentRevision, approvedRevision }: Re
     return <ErrorPanel error={revisions.error} onRetry={() => void revisions.refetch()} />;
 
   const rows = [...revisions.data].sort((a, b) => b.revision - a.revision);
+  const latestSpecHash = rows.find((r) => r.revision === currentRevision)?.specHash;
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-sm">
@@ -89,7 +91,12 @@ export function RevisionList({ figureId, currentRevision, approvedRevision }: Re
               {open === r.revision && (
                 <tr id={`revision-${r.revision}`} className="border-b border-stone-100 bg-stone-50">
                   <td colSpan={5} className="p-4">
-                    <RevisionDetails figureId={figureId} revision={r.revision} />
+                    <RevisionDetails
+                      figure={figure}
+                      revision={r.revision}
+                      latestSpecHash={latestSpecHash}
+                      canEdit={canEdit}
+                    />
                   </td>
                 </tr>
               )}

@@ -5,7 +5,7 @@ import { describeSpec } from '../utils/describe-spec';
 
 export function SpecSummary({ spec, houseStyle }: { spec: FigureSpec; houseStyle?: HouseStyle }) {
   return (
-    <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[7rem_1fr]">
+    <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[8rem_1fr]">
       {describeSpec(spec, houseStyle).map((line) => (
         <div key={line.term} className="contents">
           <dt className="font-semibold text-stone-700">{line.term}</dt>
