@@ -5,8 +5,10 @@
  * Source: the oscillation theorem at threshold (the zero-energy regular solution has as many nodes
  * as there are bound levels) and REFERENCE.md §10.5's definition of the critical point: beyond the
  * range of V the zero-energy solution is u = A r^{l+1} + B r^{−l}, and a level appears where A = 0.
- * A node lies beyond the last point exactly when A and u there have opposite signs, i.e. when
- * r u'/u + l < 0, i.e. (with u = r^{1/2} y, x = ln r) y'/y < −(l + ½).
+ * A node lies beyond the last point exactly when A and u there have opposite signs. With u = r^{1/2} y
+ * and x = ln r the free solution is y = A' t^i + B' t^{−i}, where t is the growth factor of
+ * Numerov's recurrence for g = −(l + ½)² (≈ e^{(l+½)h}); two last values give the sign of A' as that
+ * of t y_{N−1} − y_{N−2}, exactly for the discrete scheme (no derivative estimate).
  * Potentials with a Coulomb tail or confining ones have infinitely many levels (Infinity).
  * Tabulated potentials without a tail: the levels below V at the last point, on the table.
  * Accuracy: that of the Numerov discretisation, O(h⁴) in the critical parameters.
@@ -27,6 +29,8 @@ export function countBoundLevels(potential: Potential, l: number, mu: number, st
   if (potential.outerLimit !== undefined) return nodes;
   const y = s.yOut;
   const n = y.length;
-  const logSlope = (y[n - 1] - y[n - 3]) / (2 * step * y[n - 2]);
-  return nodes + (logSlope < -(l + 0.5) ? 1 : 0);
+  const f = 1 - (step * step * (l + 0.5) * (l + 0.5)) / 12;
+  const c = (12 - 10 * f) / f; // t + 1/t
+  const t = 0.5 * (c + Math.sqrt(c * c - 4));
+  return nodes + ((t * y[n - 1] - y[n - 2]) * y[n - 1] < 0 ? 1 : 0);
 }
