@@ -1,5 +1,6 @@
 // The 3D figure's scene, shared by the interactive viewport and the print page: camera, lights,
 // surfaces (both phases, optional outer surface), cloud, nodal sheets, axes and scale bar.
+import { useMemo } from 'react';
 import type { ResolvedFigureSpec } from '../../../../shared/spec/resolve-figure-spec';
 import type { OrbitalGeometry } from '../utils/orbital-geometry';
 import type { ScaleBarLayout } from '../utils/scale-bar-layout';
@@ -26,7 +27,8 @@ export interface OrbitalSceneProps {
 
 export function OrbitalScene({ geometry, spec, domLabels, lineWidthPx, pointSizePx, onScaleBar }: OrbitalSceneProps) {
   const { look, view } = spec;
-  const colours = { positive: look.positiveColour, negative: look.negativeColour };
+  // One object per colour pair: the phase-coloured meshes rebuild their vertex colours when it changes.
+  const colours = useMemo(() => ({ positive: look.positiveColour, negative: look.negativeColour }), [look.positiveColour, look.negativeColour]);
   const lighting = view.lighting;
   const outerOpacity = spec.kind.type === 'isosurface' && spec.kind.outerSurface ? spec.kind.outerSurface.opacity : 0.3;
   const surfaces = geometry.surfaces;
