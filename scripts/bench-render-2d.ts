@@ -61,14 +61,29 @@ export const BENCH_SPECS: Record<string, FigureSpecInput> = {
   'slice-3dz2-psi': {
     schemaVersion: 1,
     state: { terms: [{ n: 3, l: 2, m: 0 }] },
-    kind: { type: 'slice', plane: 'xz', quantity: 'psi', contours: { mode: 'enclosed', fractions: [0.5, 0.9] } },
+    kind: {
+      type: 'slice',
+      plane: 'xz',
+      quantity: 'psi',
+      contours: { mode: 'enclosed', fractions: [0.5, 0.9] },
+    },
     print: { ...print, heightMm: 78 },
   },
   'slice-2s-density-angstrom': {
     schemaVersion: 1,
     system: { Z: 1, nucleus: 'infinite', lengthUnit: 'angstrom' },
-    state: { terms: [{ n: 2, l: 0, m: 0 }, { n: 2, l: 1, m: 0 }] },
-    kind: { type: 'slice', plane: 'xz', quantity: 'density', contours: { mode: 'levels', levels: [0.0005, 0.002] } },
+    state: {
+      terms: [
+        { n: 2, l: 0, m: 0 },
+        { n: 2, l: 1, m: 0 },
+      ],
+    },
+    kind: {
+      type: 'slice',
+      plane: 'xz',
+      quantity: 'density',
+      contours: { mode: 'levels', levels: [0.0005, 0.002] },
+    },
     print: { ...print, heightMm: 78 },
   },
   'levels-h1-balmer': {
@@ -89,6 +104,26 @@ export const BENCH_SPECS: Record<string, FigureSpecInput> = {
     },
     print: { ...print, heightMm: 70 },
   },
+  'angular-3dz2-curve': {
+    schemaVersion: 1,
+    state: { terms: [{ n: 3, l: 2, m: 0 }] },
+    kind: { type: 'angular', mode: 'curve', quantity: 'real', plane: 'xz' },
+    look: { showNodalSurfaces: true },
+    print: { ...print, heightMm: 84 },
+  },
+  'angular-sp3-curve': {
+    schemaVersion: 1,
+    state: {
+      terms: [
+        { n: 2, l: 0, m: 0, weight: { re: 0.5, im: 0 } },
+        { n: 2, l: 1, m: 1, weight: { re: 0.5, im: 0 } },
+        { n: 2, l: 1, m: -1, weight: { re: 0.5, im: 0 } },
+        { n: 2, l: 1, m: 0, weight: { re: 0.5, im: 0 } },
+      ],
+    },
+    kind: { type: 'angular', mode: 'curve', quantity: 'real', plane: 'xz' },
+    print: { ...print, heightMm: 84 },
+  },
 };
 
 function resolve(input: FigureSpecInput): ResolvedFigureSpec {
@@ -108,7 +143,12 @@ async function main(): Promise<void> {
   const results: Record<string, unknown> = {};
   for (const [name, input] of Object.entries(BENCH_SPECS)) {
     const spec = resolve(input);
-    const times = { sceneMs: [] as number[], pngMs: [] as number[], pdfMs: [] as number[], svgMs: [] as number[] };
+    const times = {
+      sceneMs: [] as number[],
+      pngMs: [] as number[],
+      pdfMs: [] as number[],
+      svgMs: [] as number[],
+    };
     let sizes = { png: 0, pdf: 0, svg: 0 };
     for (let i = 0; i <= runs; i++) {
       let t = performance.now();

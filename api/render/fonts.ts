@@ -25,9 +25,17 @@ export interface FontkitFont {
   glyphForCodePoint(cp: number): FontkitGlyph;
 }
 
-const fontkit = createRequire(import.meta.url)('fontkit') as { create(buffer: Buffer): FontkitFont };
+const fontkit = createRequire(import.meta.url)('fontkit') as {
+  create(buffer: Buffer): FontkitFont;
+};
 
-export const FONT_DIR = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'assets', 'fonts');
+export const FONT_DIR = join(
+  dirname(fileURLToPath(import.meta.url)),
+  '..',
+  '..',
+  'assets',
+  'fonts',
+);
 export const FONT_FACES: readonly FontFace[] = ['regular', 'italic', 'semibold', 'semibold-italic'];
 
 export function fontPath(face: FontFace): string {
@@ -90,8 +98,10 @@ export const glyphOutlines: GlyphOutliner = (text, face, sizePt) => {
     for (const { command, args: a } of shape.commands) {
       if (command === 'moveTo') out.push(`M${X(a[0])} ${Y(a[1])}`);
       else if (command === 'lineTo') out.push(`L${X(a[0])} ${Y(a[1])}`);
-      else if (command === 'quadraticCurveTo') out.push(`Q${X(a[0])} ${Y(a[1])} ${X(a[2])} ${Y(a[3])}`);
-      else if (command === 'bezierCurveTo') out.push(`C${X(a[0])} ${Y(a[1])} ${X(a[2])} ${Y(a[3])} ${X(a[4])} ${Y(a[5])}`);
+      else if (command === 'quadraticCurveTo')
+        out.push(`Q${X(a[0])} ${Y(a[1])} ${X(a[2])} ${Y(a[3])}`);
+      else if (command === 'bezierCurveTo')
+        out.push(`C${X(a[0])} ${Y(a[1])} ${X(a[2])} ${Y(a[3])} ${X(a[4])} ${Y(a[5])}`);
       else out.push('Z');
     }
     pen += shape.advance * scale;

@@ -10,7 +10,13 @@
 import PDFDocument from 'pdfkit';
 import type { FontFace } from '../../shared/figures/font-metrics';
 import { encodePng } from '../../shared/figures/png-encode';
-import { MM_PER_PT, type FigureScene, type PathCommand, type SceneNode, type Stroke } from '../../shared/figures/scene';
+import {
+  MM_PER_PT,
+  type FigureScene,
+  type PathCommand,
+  type SceneNode,
+  type Stroke,
+} from '../../shared/figures/scene';
 import { layoutText } from '../../shared/figures/text-layout';
 import { FONT_FACES, fontBytes } from './fonts';
 
@@ -18,7 +24,13 @@ const PT_PER_MM = 72 / 25.4;
 /** Only used to derive pdfkit's document ID; never written to the file. */
 const FIXED_DATE = new Date(Date.UTC(2000, 0, 1));
 /** fontkit features switched off so glyphs advance exactly as font-metrics.ts measures them. */
-const PLAIN_TEXT_FEATURES = { kern: false, liga: false, calt: false, clig: false, dlig: false } as const;
+const PLAIN_TEXT_FEATURES = {
+  kern: false,
+  liga: false,
+  calt: false,
+  clig: false,
+  dlig: false,
+} as const;
 
 export interface PdfOptions {
   /** Write this creation date into the file (off by default: same scene → same bytes). */
@@ -44,7 +56,8 @@ function applyStroke(doc: PDFKit.PDFDocument, s: Stroke): void {
   doc.lineCap(s.cap ?? 'butt');
   doc.lineJoin(s.join ?? 'round');
   // pdfkit accepts a dash array at run time; its type declarations only list a single length.
-  if (s.dashPt && s.dashPt.length > 0) doc.dash(s.dashPt.map((d) => d * MM_PER_PT) as unknown as number, {});
+  if (s.dashPt && s.dashPt.length > 0)
+    doc.dash(s.dashPt.map((d) => d * MM_PER_PT) as unknown as number, {});
   else doc.undash();
 }
 
@@ -70,14 +83,21 @@ function drawNode(doc: PDFKit.PDFDocument, node: SceneNode, dpi: number): void {
       doc.fillColor(node.colour);
       for (const run of layout.runs) {
         doc.font(run.face).fontSize(run.sizePt * MM_PER_PT);
-        doc.text(run.text, run.dx, run.dy, { lineBreak: false, baseline: 'alphabetic', features: PLAIN_TEXT_FEATURES as unknown as PDFKit.Mixins.TextOptions['features'] });
+        doc.text(run.text, run.dx, run.dy, {
+          lineBreak: false,
+          baseline: 'alphabetic',
+          features: PLAIN_TEXT_FEATURES as unknown as PDFKit.Mixins.TextOptions['features'],
+        });
       }
       doc.restore();
       return;
     }
     case 'image': {
       const png = encodePng(node.pixelWidth, node.pixelHeight, node.rgba, { dpi, level: 4 });
-      doc.image(Buffer.from(png.buffer, png.byteOffset, png.byteLength), node.x, node.y, { width: node.width, height: node.height });
+      doc.image(Buffer.from(png.buffer, png.byteOffset, png.byteLength), node.x, node.y, {
+        width: node.width,
+        height: node.height,
+      });
       return;
     }
     case 'group': {
@@ -107,7 +127,8 @@ export function sceneToPdf(scene: FigureScene, options: PdfOptions = {}): Promis
     displayTitle: true,
   });
   // pdfkit reads CreationDate (ID, XMP) but writes only the enumerable info keys to the file.
-  if (!options.creationDate) Object.defineProperty(doc.info, 'CreationDate', { value: FIXED_DATE, enumerable: false });
+  if (!options.creationDate)
+    Object.defineProperty(doc.info, 'CreationDate', { value: FIXED_DATE, enumerable: false });
   for (const face of FONT_FACES) doc.registerFont(face, fontBytes(face as FontFace));
   const chunks: Buffer[] = [];
   const done = new Promise<Buffer>((resolve, reject) => {

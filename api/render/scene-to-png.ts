@@ -9,7 +9,10 @@ import { sceneToSvg } from '../../shared/figures/scene-to-svg';
 import { glyphOutlines } from './fonts';
 
 /** Pixel size of a figure printed at its dpi. */
-export function pixelSize(scene: Pick<FigureScene, 'widthMm' | 'heightMm' | 'dpi'>): { width: number; height: number } {
+export function pixelSize(scene: Pick<FigureScene, 'widthMm' | 'heightMm' | 'dpi'>): {
+  width: number;
+  height: number;
+} {
   return {
     width: Math.round((scene.widthMm / 25.4) * scene.dpi),
     height: Math.round((scene.heightMm / 25.4) * scene.dpi),
@@ -22,7 +25,9 @@ export const MAX_PNG_SIDE = 12_000;
 export async function sceneToPng(scene: FigureScene): Promise<Buffer> {
   const size = pixelSize(scene);
   if (size.width > MAX_PNG_SIDE || size.height > MAX_PNG_SIDE) {
-    throw new Error(`print: ${size.width} × ${size.height} px exceeds the largest PNG side of ${MAX_PNG_SIDE} px; lower the dpi or the size`);
+    throw new Error(
+      `print: ${size.width} × ${size.height} px exceeds the largest PNG side of ${MAX_PNG_SIDE} px; lower the dpi or the size`,
+    );
   }
   const svg = sceneToSvg(scene, { glyphOutlines, pixelSize: size });
   // librsvg treats px as device pixels at 72 dpi, so the root's pixel size is the output size.

@@ -26,7 +26,9 @@ interface FontkitFont {
   hasGlyphForCodePoint(cp: number): boolean;
   glyphForCodePoint(cp: number): FontkitGlyph;
 }
-const fontkit = createRequire(import.meta.url)('fontkit') as { openSync(path: string): FontkitFont };
+const fontkit = createRequire(import.meta.url)('fontkit') as {
+  openSync(path: string): FontkitFont;
+};
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const FACES = ['regular', 'italic', 'semibold', 'semibold-italic'] as const;
@@ -41,10 +43,39 @@ const CODE_POINTS = [
   ...range(0x391, 0x3a1),
   ...range(0x3a3, 0x3a9),
   ...range(0x3b1, 0x3c9),
-  0xa0, 0xb0, 0xb1, 0xb2, 0xb3, 0xb5, 0xb7, 0xb9, 0xc5, 0xd7, 0x127,
-  0x2009, 0x2013, 0x2014, 0x2018, 0x2019, 0x201c, 0x201d, 0x2026, 0x202f, 0x2032,
-  0x2070, ...range(0x2074, 0x207b), ...range(0x2080, 0x2089),
-  0x2192, 0x2193, 0x2191, 0x2212, 0x221a, 0x221e, 0x2248, 0x2264, 0x2265,
+  0xa0,
+  0xb0,
+  0xb1,
+  0xb2,
+  0xb3,
+  0xb5,
+  0xb7,
+  0xb9,
+  0xc5,
+  0xd7,
+  0x127,
+  0x2009,
+  0x2013,
+  0x2014,
+  0x2018,
+  0x2019,
+  0x201c,
+  0x201d,
+  0x2026,
+  0x202f,
+  0x2032,
+  0x2070,
+  ...range(0x2074, 0x207b),
+  ...range(0x2080, 0x2089),
+  0x2192,
+  0x2193,
+  0x2191,
+  0x2212,
+  0x221a,
+  0x221e,
+  0x2248,
+  0x2264,
+  0x2265,
 ];
 
 function faceMetrics(face: (typeof FACES)[number]): { text: string; missing: number[] } {
@@ -59,7 +90,8 @@ function faceMetrics(face: (typeof FACES)[number]): { text: string; missing: num
     advances.push(`${cp}:${font.glyphForCodePoint(cp).advanceWidth}`);
   }
   const lines: string[] = [];
-  for (let i = 0; i < advances.length; i += 12) lines.push(`      ${advances.slice(i, i + 12).join(', ')},`);
+  for (let i = 0; i < advances.length; i += 12)
+    lines.push(`      ${advances.slice(i, i + 12).join(', ')},`);
   const text = [
     `  '${face}': {`,
     `    postscriptName: '${font.postscriptName}',`,

@@ -4,6 +4,7 @@
  * vector overlay comes from build3dOverlay.
  */
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
+import { buildAngularCurveScene } from './build-angular-curve-scene';
 import { buildLevelsScene } from './build-levels-scene';
 import { buildRadialScene } from './build-radial-scene';
 import { buildSliceScene } from './build-slice-scene';
@@ -18,7 +19,16 @@ export function buildFigureScene(spec: ResolvedFigureSpec): FigureScene {
       return buildSliceScene(spec);
     case 'levels':
       return buildLevelsScene(spec);
+    case 'angular':
+      if (spec.kind.mode === 'curve') return buildAngularCurveScene(spec);
+      throw new FigureSpecError(
+        'kind.mode',
+        'an angular surface is a 3D figure; draw it with the 3D renderer and build3dOverlay',
+      );
     default:
-      throw new FigureSpecError('kind.type', `"${spec.kind.type}" is not a 2D figure; draw it with the 3D renderer and build3dOverlay`);
+      throw new FigureSpecError(
+        'kind.type',
+        `"${spec.kind.type}" is not a 2D figure; draw it with the 3D renderer and build3dOverlay`,
+      );
   }
 }

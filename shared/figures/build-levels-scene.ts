@@ -12,14 +12,23 @@ import { energyLevels } from '../physics/energy-levels';
 import { spectralLine, type SpectralLine } from '../physics/spectral-lines';
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
 import { FigureSpecError } from './figure-error';
+import { sceneForSpec } from './scene-for-spec';
 import { figureStyle, type FigureStyle } from './figure-style';
 import { describeSystem, systemMassRatio } from './figure-system';
 import { LabelPlacer, placeNear } from './label-placer';
 import { formatSignificant } from './number-format';
 import { text } from './plot-axes';
-import { lineNode, polylineCommands, ptToMm, type FigureScene, type PathNode, type SceneFact, type SceneNode, type TextRun } from './scene';
-import { FONT_METRICS } from './font-metrics';
-import { layoutRuns } from './text-layout';
+import {
+  lineNode,
+  polylineCommands,
+  ptToMm,
+  type FigureScene,
+  type PathNode,
+  type SceneFact,
+  type SceneNode,
+  type TextRun,
+} from './scene';
+import { capHeightMm, layoutRuns } from './text-layout';
 
 type LevelsKind = Extract<ResolvedFigureSpec['kind'], { type: 'levels' }>;
 
@@ -29,7 +38,14 @@ const KEY_GAP_MM = 3;
 const ENERGY_DIGITS = 4;
 const WAVELENGTH_DIGITS = 7;
 const GREEK = 'αβγδεζηθικλμ';
-const SERIES_PREFIX: Record<string, string> = { Lyman: 'Ly', Balmer: 'H', Paschen: 'Pa', Brackett: 'Br', Pfund: 'Pf', Humphreys: 'Hu' };
+const SERIES_PREFIX: Record<string, string> = {
+  Lyman: 'Ly',
+  Balmer: 'H',
+  Paschen: 'Pa',
+  Brackett: 'Br',
+  Pfund: 'Pf',
+  Humphreys: 'Hu',
+};
 
 const plain = (t: string): TextRun => ({ text: t, shift: 'base' });
 const italic = (t: string): TextRun => ({ text: t, shift: 'base', italic: true });
@@ -39,11 +55,6 @@ export function lineName(line: Pick<SpectralLine, 'series' | 'nUpper' | 'nLower'
   const step = line.nUpper - line.nLower;
   if (line.series === null || step > GREEK.length) return `${line.nUpper}→${line.nLower}`;
   return `${SERIES_PREFIX[line.series]}${GREEK[step - 1]}`;
-}
-
-function capMm(sizePt: number): number {
-  const m = FONT_METRICS.regular;
-  return ptToMm((m.capHeight / m.unitsPerEm) * sizePt);
 }
 
 /**
@@ -64,7 +75,11 @@ function spreadLabels(desired: readonly number[], gap: number, topBound: number)
 
 function checkTransitions(kind: LevelsKind): void {
   kind.transitions.forEach((t, i) => {
-    if (t.upper <= t.lower) throw new FigureSpecError(`kind.transitions[${i}].upper`, `must be greater than lower = ${t.lower}, got ${t.upper}`);
+    if (t.upper <= t.lower)
+      throw new FigureSpecError(
+        `kind.transitions[${i}].upper`,
+        `must be greater than lower = ${t.lower}, got ${t.upper}`,
+      );
   });
 }
 
@@ -75,17 +90,44 @@ interface KeyRow {
   role: string;
 }
 
-function arrow(x: number, yFrom: number, yTo: number, colour: string, style: FigureStyle): PathNode[] {
+function arrow(
+  x: number,
+  yFrom: number,
+  yTo: number,
+  colour: string,
+  style: FigureStyle,
+): PathNode[] {
   const head = 1.3;
   const half = 0.55;
   return [
-    { type: 'path', commands: polylineCommands([[x, yFrom], [x, yTo - head * 0.8]]), stroke: { colour, widthPt: style.lineWidthPt * 1.2 }, role: 'transition-arrow' },
-    { type: 'path', commands: polylineCommands([[x - half, yTo - head], [x, yTo], [x + half, yTo - head]], true), fill: { colour }, role: 'transition-head' },
+    {
+      type: 'path',
+      commands: polylineCommands([
+        [x, yFrom],
+        [x, yTo - head * 0.8],
+      ]),
+      stroke: { colour, widthPt: style.lineWidthPt * 1.2 },
+      role: 'transition-arrow',
+    },
+    {
+      type: 'path',
+      commands: polylineCommands(
+        [
+          [x - half, yTo - head],
+          [x, yTo],
+          [x + half, yTo - head],
+        ],
+        true,
+      ),
+      fill: { colour },
+      role: 'transition-head',
+    },
   ];
 }
 
 export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
-  if (spec.kind.type !== 'levels') throw new FigureSpecError('kind.type', `expected "levels", got "${spec.kind.type}"`);
+  if (spec.kind.type !== 'levels')
+    throw new FigureSpecError('kind.type', `expected "levels", got "${spec.kind.type}"`);
   const kind = spec.kind;
   checkTransitions(kind);
   const style = figureStyle(spec);
@@ -105,21 +147,55 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
   let lastSeries: string | null | undefined;
   lines.forEach((line, i) => {
     if (line.series !== lastSeries) {
-      keyRows.push({ runs: [{ text: line.series ? `${line.series} series` : `Lines to n = ${line.nLower}`, shift: 'base', weight: 600 }], sizePt: keySize, colour: style.ink, role: 'key-series' });
+      keyRows.push({
+        runs: [
+          {
+            text: line.series ? `${line.series} series` : `Lines to n = ${line.nLower}`,
+            shift: 'base',
+            weight: 600,
+          },
+        ],
+        sizePt: keySize,
+        colour: style.ink,
+        role: 'key-series',
+      });
       lastSeries = line.series;
     }
     const name = lineName(line);
     const vac = `${formatSignificant(line.vacuumNm, WAVELENGTH_DIGITS)} nm`;
-    keyRows.push({ runs: [plain(`${name}  `), plain(`${line.nUpper}→${line.nLower}  `), plain(vac)], sizePt: keySize, colour: style.curveColours[i % 2 === 0 ? 0 : 1], role: 'key-line' });
-    facts.push({ name: `${line.series ?? 'line'} ${name} vacuum wavelength`, value: line.vacuumNm, unit: 'nm', printed: vac });
+    keyRows.push({
+      runs: [plain(`${name}  `), plain(`${line.nUpper}→${line.nLower}  `), plain(vac)],
+      sizePt: keySize,
+      colour: style.curveColours[i % 2 === 0 ? 0 : 1],
+      role: 'key-line',
+    });
+    facts.push({
+      name: `${line.series ?? 'line'} ${name} vacuum wavelength`,
+      value: line.vacuumNm,
+      unit: 'nm',
+      printed: vac,
+    });
     if (line.airNm !== null) {
       const air = `${formatSignificant(line.airNm, WAVELENGTH_DIGITS)} nm`;
-      keyRows.push({ runs: [plain(`in air ${air}`)], sizePt: keySize * 0.92, colour: style.muted, role: 'key-air' });
-      facts.push({ name: `${line.series ?? 'line'} ${name} air wavelength`, value: line.airNm, unit: 'nm', printed: air });
+      keyRows.push({
+        runs: [plain(`in air ${air}`)],
+        sizePt: keySize * 0.92,
+        colour: style.muted,
+        role: 'key-air',
+      });
+      facts.push({
+        name: `${line.series ?? 'line'} ${name} air wavelength`,
+        value: line.airNm,
+        unit: 'nm',
+        printed: air,
+      });
     }
   });
   const rowHeight = ptToMm(keySize) * 1.3;
-  const keyWidth = keyRows.length === 0 ? 0 : Math.max(...keyRows.map((r) => layoutRuns(r.runs, r.sizePt, 'start').widthMm));
+  const keyWidth =
+    keyRows.length === 0
+      ? 0
+      : Math.max(...keyRows.map((r) => layoutRuns(r.runs, r.sizePt, 'start').widthMm));
 
   // Level labels "n = 3, −1.512 eV" to the right of the lines.
   const labelSize = style.smallSizePt;
@@ -129,24 +205,44 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
     return [italic('n'), plain(` = ${lv.n}, ${printed}`)];
   });
   const limitRuns: TextRun[] = [italic('n'), plain(' = ∞, 0 eV')];
-  const labelWidth = Math.max(...[...levelRuns, limitRuns].map((r) => layoutRuns(r, labelSize, 'start').widthMm));
+  const labelWidth = Math.max(
+    ...[...levelRuns, limitRuns].map((r) => layoutRuns(r, labelSize, 'start').widthMm),
+  );
 
   const { widthMm, heightMm } = spec.print;
-  const keyBeside = keyRows.length > 0 && widthMm - 2 * MARGIN_MM - labelWidth - LABEL_GAP_MM - KEY_GAP_MM - keyWidth >= 22;
-  const keyBelowHeight = keyRows.length > 0 && !keyBeside ? keyRows.length * rowHeight + KEY_GAP_MM : 0;
+  const keyBeside =
+    keyRows.length > 0 &&
+    widthMm - 2 * MARGIN_MM - labelWidth - LABEL_GAP_MM - KEY_GAP_MM - keyWidth >= 22;
+  const keyBelowHeight =
+    keyRows.length > 0 && !keyBeside ? keyRows.length * rowHeight + KEY_GAP_MM : 0;
   const x0 = MARGIN_MM;
-  const x1 = widthMm - MARGIN_MM - labelWidth - LABEL_GAP_MM - (keyBeside ? KEY_GAP_MM + keyWidth : 0);
-  const cap = capMm(labelSize);
+  const x1 =
+    widthMm - MARGIN_MM - labelWidth - LABEL_GAP_MM - (keyBeside ? KEY_GAP_MM + keyWidth : 0);
+  const cap = capHeightMm(labelSize);
   const yTop = MARGIN_MM + cap + 1.5;
   const yBottom = heightMm - MARGIN_MM - keyBelowHeight - 1;
-  if (x1 - x0 < 15 || yBottom - yTop < 20) throw new FigureSpecError('print', `${widthMm} × ${heightMm} mm is too small for this level diagram`);
+  if (x1 - x0 < 15 || yBottom - yTop < 20)
+    throw new FigureSpecError(
+      'print',
+      `${widthMm} × ${heightMm} mm is too small for this level diagram`,
+    );
   const eLow = levels[0].eV;
   const yOf = (eV: number): number => yTop + ((0 - eV) / (0 - eLow)) * (yBottom - yTop);
 
   const nodes: SceneNode[] = [];
   const levelStroke = { colour: style.ink, widthPt: style.lineWidthPt * 1.3 };
-  nodes.push(lineNode(x0, yTop, x1, yTop, { colour: style.muted, widthPt: style.lineWidthPt, dashPt: [2.5, 1.5] }, 'ionisation-limit'));
-  for (const lv of levels) nodes.push(lineNode(x0, yOf(lv.eV), x1, yOf(lv.eV), levelStroke, 'level'));
+  nodes.push(
+    lineNode(
+      x0,
+      yTop,
+      x1,
+      yTop,
+      { colour: style.muted, widthPt: style.lineWidthPt, dashPt: [2.5, 1.5] },
+      'ionisation-limit',
+    ),
+  );
+  for (const lv of levels)
+    nodes.push(lineNode(x0, yOf(lv.eV), x1, yOf(lv.eV), levelStroke, 'level'));
 
   // Labels: spread apart where levels crowd towards the limit, with a leader back to the level.
   const desired = [yTop, ...levels.map((lv) => yOf(lv.eV))].map((y) => y + cap / 2);
@@ -155,9 +251,27 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
   spread.forEach((y, i) => {
     const lx = x1 + LABEL_GAP_MM;
     if (Math.abs(y - desired[i]) > 0.05) {
-      nodes.push({ type: 'path', commands: polylineCommands([[x1, desired[i] - cap / 2], [lx - 0.3, y - cap / 2]]), stroke: { colour: style.faint, widthPt: style.axisWidthPt * 0.7 }, role: 'leader' });
+      nodes.push({
+        type: 'path',
+        commands: polylineCommands([
+          [x1, desired[i] - cap / 2],
+          [lx - 0.3, y - cap / 2],
+        ]),
+        stroke: { colour: style.faint, widthPt: style.axisWidthPt * 0.7 },
+        role: 'leader',
+      });
     }
-    nodes.push(text(lx + 0.2, y, allRuns[i], labelSize, 'start', i === 0 ? style.muted : style.ink, i === 0 ? 'limit-label' : 'level-label'));
+    nodes.push(
+      text(
+        lx + 0.2,
+        y,
+        allRuns[i],
+        labelSize,
+        'start',
+        i === 0 ? style.muted : style.ink,
+        i === 0 ? 'limit-label' : 'level-label',
+      ),
+    );
   });
 
   // Arrows, grouped by series from left to right, with their names beside them.
@@ -178,39 +292,48 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
     const yLow = yOf(levels.find((lv) => lv.n === line.nLower)?.eV ?? 0);
     const parts = arrow(x, yUp, yLow, colour, style);
     nodes.push(...parts);
-    placer.avoidCurve([[x, yUp], [x, yLow]]);
+    placer.avoidCurve([
+      [x, yUp],
+      [x, yLow],
+    ]);
     arrows.push({ x, line, colour });
   });
   for (const { x, line, colour } of arrows) {
     const yUp = yOf(levels.find((lv) => lv.n === line.nUpper)?.eV ?? 0);
     const yLow = yOf(levels.find((lv) => lv.n === line.nLower)?.eV ?? 0);
-    const placed = placeNear(placer, [x, (yUp + yLow) / 2], capMm(labelSize), (lx, ly, anchor) => text(lx, ly, [plain(lineName(line))], labelSize, anchor, colour, 'transition-label'));
+    const placed = placeNear(
+      placer,
+      [x, (yUp + yLow) / 2],
+      capHeightMm(labelSize),
+      (lx, ly, anchor) =>
+        text(lx, ly, [plain(lineName(line))], labelSize, anchor, colour, 'transition-label'),
+    );
     if (placed) nodes.push(placed.label);
   }
 
   // The key, beside the diagram when there is room, else below it.
   const kx = keyBeside ? widthMm - MARGIN_MM - keyWidth : MARGIN_MM;
-  let ky = keyBeside ? yTop + capMm(keySize) : yBottom + KEY_GAP_MM + capMm(keySize) + 1;
+  let ky = keyBeside
+    ? yTop + capHeightMm(keySize)
+    : yBottom + KEY_GAP_MM + capHeightMm(keySize) + 1;
   for (const row of keyRows) {
-    if (row.role === 'key-series' && ky > yTop + capMm(keySize) + 0.1) ky += rowHeight * 0.35;
+    if (row.role === 'key-series' && ky > yTop + capHeightMm(keySize) + 0.1) ky += rowHeight * 0.35;
     nodes.push(text(kx, ky, row.runs, row.sizePt, 'start', row.colour, row.role));
     ky += rowHeight;
   }
 
   const system = describeSystem(spec);
-  const notes = ['Non-relativistic levels (no fine structure, Lamb shift or hyperfine structure): measured lines differ by up to about 3 × 10⁻⁵ of the wavelength.'];
-  if (lines.some((l) => l.airNm === null)) notes.push('No air wavelength is given below 200 nm, where the air-index formula does not apply.');
-  return {
-    widthMm,
-    heightMm,
-    background: spec.print.background,
-    dpi: spec.print.dpi,
-    children: nodes,
-    metadata: {
-      title: `Energy levels n = 1 … ${kind.nMax} (${system})`,
-      altText: `Energy-level diagram of ${system}: levels ${levels.map((lv) => `n = ${lv.n} at ${formatSignificant(lv.eV, ENERGY_DIGITS)} eV`).join(', ')}; ionisation limit at 0 eV.${lines.length ? ` Transitions: ${lines.map((l) => `${lineName(l)} (${l.nUpper} → ${l.nLower}) at ${formatSignificant(l.vacuumNm, WAVELENGTH_DIGITS)} nm in vacuum${l.airNm !== null ? `, ${formatSignificant(l.airNm, WAVELENGTH_DIGITS)} nm in air` : ''}`).join('; ')}.` : ''}`,
-      facts,
-      notes,
-    },
-  };
+  const notes = [
+    'Non-relativistic levels (no fine structure, Lamb shift or hyperfine structure): measured lines differ by up to about 3 × 10⁻⁵ of the wavelength.',
+  ];
+  if (lines.some((l) => l.airNm === null))
+    notes.push(
+      'No air wavelength is given below 200 nm, where the air-index formula does not apply.',
+    );
+  return sceneForSpec(spec, nodes, {
+    title: `Energy levels n = 1 … ${kind.nMax} (${system})`,
+    altText: `Energy-level diagram of ${system}: levels ${levels.map((lv) => `n = ${lv.n} at ${formatSignificant(lv.eV, ENERGY_DIGITS)} eV`).join(', ')}; ionisation limit at 0 eV.${lines.length ? ` Transitions: ${lines.map((l) => `${lineName(l)} (${l.nUpper} → ${l.nLower}) at ${formatSignificant(l.vacuumNm, WAVELENGTH_DIGITS)} nm in vacuum${l.airNm !== null ? `, ${formatSignificant(l.airNm, WAVELENGTH_DIGITS)} nm in air` : ''}`).join('; ')}.` : ''}`,
+    facts,
+    notes,
+  });
 }

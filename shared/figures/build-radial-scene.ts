@@ -20,6 +20,7 @@ import { radiusEnclosingProbability } from '../physics/radius-enclosing-probabil
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
 import { clipPolyline } from './clip-polyline';
 import { FigureSpecError } from './figure-error';
+import { sceneForSpec } from './scene-for-spec';
 import { figureStyle, type FigureStyle } from './figure-style';
 import { describeSystem, systemMassRatio } from './figure-system';
 import { shellRuns } from './label-runs';
@@ -27,10 +28,28 @@ import { LabelPlacer, placeNear, type NearPlacement } from './label-placer';
 import { legendAvoiding, type LegendEntry } from './legend';
 import { lengthUnit, type LengthUnit } from './length-units';
 import { formatSignificant } from './number-format';
-import { axisNodes, linearScale, makeAxis, text, xAxisHeightMm, yAxisWidthMm, type AxisDef, type Frame } from './plot-axes';
-import { circleCommands, lineNode, polylineCommands, runsText, type FigureScene, type SceneFact, type SceneNode, type Stroke, type TextRun } from './scene';
-import { FONT_METRICS } from './font-metrics';
-import { ptToMm } from './scene';
+import {
+  axisNodes,
+  linearScale,
+  makeAxis,
+  text,
+  xAxisHeightMm,
+  yAxisWidthMm,
+  type AxisDef,
+  type Frame,
+} from './plot-axes';
+import {
+  circleCommands,
+  lineNode,
+  polylineCommands,
+  runsText,
+  type FigureScene,
+  type SceneFact,
+  type SceneNode,
+  type Stroke,
+  type TextRun,
+} from './scene';
+import { capHeightMm } from './text-layout';
 
 type RadialKind = Extract<ResolvedFigureSpec['kind'], { type: 'radial' }>;
 type Quantity = RadialKind['curves'][number]['quantity'];
@@ -96,7 +115,15 @@ function autoRange(curves: readonly Curve[], ctx: Context): number {
   let r = 0;
   for (const c of curves) {
     if (c.quantity === 'veff') {
-      const levels = effectivePotentialCurve({ l: c.l, Z: ctx.Z, muRatio: ctx.mu, rMin: 1e-3, rMax: 1, points: 2, nMax: c.n }).levels;
+      const levels = effectivePotentialCurve({
+        l: c.l,
+        Z: ctx.Z,
+        muRatio: ctx.mu,
+        rMin: 1e-3,
+        rMax: 1,
+        points: 2,
+        nMax: c.n,
+      }).levels;
       r = Math.max(r, AUTO_RANGE_TURNING_POINTS * levels[levels.length - 1].outerTurningPoint);
     } else {
       r = Math.max(r, radiusEnclosingProbability(c.n, c.l, AUTO_RANGE_PROBABILITY, ctx.Z, ctx.mu));
@@ -112,25 +139,28 @@ interface Panel {
 
 function checkCurves(kind: RadialKind): void {
   kind.curves.forEach((c, i) => {
-    if (c.l >= c.n) throw new FigureSpecError(`kind.curves[${i}].l`, `l must be less than n = ${c.n}, got ${c.l}`);
+    if (c.l >= c.n)
+      throw new FigureSpecError(
+        `kind.curves[${i}].l`,
+        `l must be less than n = ${c.n}, got ${c.l}`,
+      );
   });
-  if (kind.rMax !== undefined && !(kind.rMax > 0)) throw new FigureSpecError('kind.rMax', 'must be a positive number of bohr');
+  if (kind.rMax !== undefined && !(kind.rMax > 0))
+    throw new FigureSpecError('kind.rMax', 'must be a positive number of bohr');
 }
 
 function curveKey(c: Curve): string {
   return `${c.n},${c.l}`;
 }
 
-function capMm(sizePt: number): number {
-  const m = FONT_METRICS.regular;
-  return ptToMm((m.capHeight / m.unitsPerEm) * sizePt);
-}
-
 /** The label and, when it sits away from its point, a thin leader line to it. */
 function placedNodes(p: NearPlacement, style: FigureStyle): SceneNode[] {
   if (!p.leader) return [p.label];
   const [[x1, y1], [x2, y2]] = p.leader;
-  return [lineNode(x1, y1, x2, y2, { colour: style.muted, widthPt: style.axisWidthPt * 0.7 }, 'leader'), p.label];
+  return [
+    lineNode(x1, y1, x2, y2, { colour: style.muted, widthPt: style.axisWidthPt * 0.7 }, 'leader'),
+    p.label,
+  ];
 }
 
 function valueRuns(value: number, unit: string): TextRun[] {
@@ -149,20 +179,39 @@ function functionData(panel: Panel, rMaxBohr: number, ctx: Context): FunctionDat
   const series = panel.curves.map((c) => rs.map((r) => curveValue(c, r, ctx)));
   let lo = 0;
   let hi = 0;
-  for (const s of series) for (const v of s) {
-    lo = Math.min(lo, v);
-    hi = Math.max(hi, v);
-  }
+  for (const s of series)
+    for (const v of s) {
+      lo = Math.min(lo, v);
+      hi = Math.max(hi, v);
+    }
   if (panel.quantity === 'cumulative') hi = 1;
-  const yAxis = makeAxis(lo, panel.quantity === 'cumulative' ? 1 : hi * 1.04, quantityTitle(panel.quantity), quantityUnit(panel.quantity, ctx), panel.quantity === 'cumulative');
+  const yAxis = makeAxis(
+    lo,
+    panel.quantity === 'cumulative' ? 1 : hi * 1.04,
+    quantityTitle(panel.quantity),
+    quantityUnit(panel.quantity, ctx),
+    panel.quantity === 'cumulative',
+  );
   return { yAxis, rs, series };
 }
 
 /** Drawing of one panel of R, r²R² or P(r) curves with node and most-probable-radius marks. */
-function functionPanel(panel: Panel, data: FunctionData, frame: Frame, xAxis: AxisDef, rMaxBohr: number, ctx: Context, showXLabels: boolean, placer: LabelPlacer): SceneNode[] {
+function functionPanel(
+  panel: Panel,
+  data: FunctionData,
+  frame: Frame,
+  xAxis: AxisDef,
+  rMaxBohr: number,
+  ctx: Context,
+  showXLabels: boolean,
+  placer: LabelPlacer,
+): SceneNode[] {
   const { style, unit } = ctx;
   const { yAxis, rs, series } = data;
-  const nodes: SceneNode[] = axisNodes(frame, xAxis, yAxis, style, { xLabels: showXLabels, zeroLine: true });
+  const nodes: SceneNode[] = axisNodes(frame, xAxis, yAxis, style, {
+    xLabels: showXLabels,
+    zeroLine: true,
+  });
   const yScale = Math.pow(10, -yAxis.exponent);
   const sx = linearScale(xAxis.ticks.min, xAxis.ticks.max, frame.x0, frame.x1);
   const sy = linearScale(yAxis.ticks.min, yAxis.ticks.max, frame.y1, frame.y0);
@@ -172,46 +221,95 @@ function functionPanel(panel: Panel, data: FunctionData, frame: Frame, xAxis: Ax
   const drawn: [number, number][] = [];
   panel.curves.forEach((c, i) => {
     const pts = rs.map((r, k) => [X(r), Y(series[i][k])] as [number, number]);
-    for (const piece of clipPolyline(pts, { x0: frame.x0, y0: frame.y0 - 0.01, x1: frame.x1, y1: frame.y1 + 0.01 })) {
-      nodes.push({ type: 'path', commands: polylineCommands(piece), stroke: ctx.colourOf(c), role: 'curve' });
+    for (const piece of clipPolyline(pts, {
+      x0: frame.x0,
+      y0: frame.y0 - 0.01,
+      x1: frame.x1,
+      y1: frame.y1 + 0.01,
+    })) {
+      nodes.push({
+        type: 'path',
+        commands: polylineCommands(piece),
+        stroke: ctx.colourOf(c),
+        role: 'curve',
+      });
       drawn.push(...piece);
     }
   });
   placer.avoidCurve(drawn);
-  const entries: LegendEntry[] = panel.curves.map((c) => ({ runs: shellRuns(c.n, c.l), stroke: ctx.colourOf(c) }));
+  const entries: LegendEntry[] = panel.curves.map((c) => ({
+    runs: shellRuns(c.n, c.l),
+    stroke: ctx.colourOf(c),
+  }));
   const key = legendAvoiding(entries, frame, style.smallSizePt, style.ink, drawn);
   placer.occupy(key.box);
   nodes.push(...key.nodes);
 
   const markerSize = style.smallSizePt * 0.92;
-  const cap = capMm(markerSize);
+  const cap = capHeightMm(markerSize);
   for (const c of panel.curves) {
     const name = runsText(shellRuns(c.n, c.l));
     const stroke = ctx.colourOf(c);
-    if (ctx.spec.kind.type === 'radial' && ctx.spec.kind.showNodes && panel.quantity !== 'cumulative') {
+    if (
+      ctx.spec.kind.type === 'radial' &&
+      ctx.spec.kind.showNodes &&
+      panel.quantity !== 'cumulative'
+    ) {
       for (const node of radialNodes(c.n, c.l, ctx.Z, ctx.mu)) {
         if (node > rMaxBohr) continue;
         const x = X(node);
         const y = Y(0);
-        nodes.push({ type: 'path', commands: circleCommands(x, y, 0.75), stroke: { ...stroke, dashPt: undefined }, role: 'node-marker' });
+        nodes.push({
+          type: 'path',
+          commands: circleCommands(x, y, 0.75),
+          stroke: { ...stroke, dashPt: undefined },
+          role: 'node-marker',
+        });
         const printed = formatSignificant(node * unit.perBohr, 3);
-        ctx.facts.push({ name: `${name} radial node`, value: node * unit.perBohr, unit: unit.symbol, printed: `${printed} ${unit.symbol}` });
+        ctx.facts.push({
+          name: `${name} radial node`,
+          value: node * unit.perBohr,
+          unit: unit.symbol,
+          printed: `${printed} ${unit.symbol}`,
+        });
         const runs = valueRuns(node * unit.perBohr, unit.symbol);
-        const placed = placeNear(placer, [x, y], cap, (lx, ly, anchor) => text(lx, ly, runs, markerSize, anchor, stroke.colour, 'node-label'));
+        const placed = placeNear(placer, [x, y], cap, (lx, ly, anchor) =>
+          text(lx, ly, runs, markerSize, anchor, stroke.colour, 'node-label'),
+        );
         if (placed) nodes.push(...placedNodes(placed, style));
       }
     }
-    if (ctx.spec.kind.type === 'radial' && ctx.spec.kind.showMostProbable && panel.quantity === 'r2R2') {
+    if (
+      ctx.spec.kind.type === 'radial' &&
+      ctx.spec.kind.showMostProbable &&
+      panel.quantity === 'r2R2'
+    ) {
       const rp = mostProbableRadius(c.n, c.l, ctx.Z, ctx.mu);
       if (rp > rMaxBohr) continue;
       const peak = curveValue(c, rp, ctx);
       const x = X(rp);
       const y = Y(peak);
-      nodes.push(lineNode(x, y, x, frame.y1, { colour: stroke.colour, widthPt: style.axisWidthPt, dashPt: [1.5, 1.2] }, 'most-probable-line'));
+      nodes.push(
+        lineNode(
+          x,
+          y,
+          x,
+          frame.y1,
+          { colour: stroke.colour, widthPt: style.axisWidthPt, dashPt: [1.5, 1.2] },
+          'most-probable-line',
+        ),
+      );
       const printed = `${formatSignificant(rp * unit.perBohr, 3)} ${unit.symbol}`;
-      ctx.facts.push({ name: `${name} most probable radius`, value: rp * unit.perBohr, unit: unit.symbol, printed });
+      ctx.facts.push({
+        name: `${name} most probable radius`,
+        value: rp * unit.perBohr,
+        unit: unit.symbol,
+        printed,
+      });
       const runs: TextRun[] = [italic('r'), sub('mp'), plain(` = ${printed}`)];
-      const placed = placeNear(placer, [x, y], cap, (lx, ly, anchor) => text(lx, ly, runs, markerSize, anchor, stroke.colour, 'most-probable-label'));
+      const placed = placeNear(placer, [x, y], cap, (lx, ly, anchor) =>
+        text(lx, ly, runs, markerSize, anchor, stroke.colour, 'most-probable-label'),
+      );
       if (placed) nodes.push(...placedNodes(placed, style));
     }
   }
@@ -229,8 +327,18 @@ function potentialAxis(panel: Panel, ctx: Context): AxisDef {
   let lo = 0;
   for (const [l, curves] of curvesByL(panel)) {
     const nMax = Math.max(...curves.map((c) => c.n));
-    const levels = effectivePotentialCurve({ l, Z: ctx.Z, muRatio: ctx.mu, rMin: 1e-3, rMax: 1, points: 2, nMax }).levels;
-    const lowest = Math.min(...levels.filter((lv) => curves.some((c) => c.n === lv.n)).map((lv) => lv.energy));
+    const levels = effectivePotentialCurve({
+      l,
+      Z: ctx.Z,
+      muRatio: ctx.mu,
+      rMin: 1e-3,
+      rMax: 1,
+      points: 2,
+      nMax,
+    }).levels;
+    const lowest = Math.min(
+      ...levels.filter((lv) => curves.some((c) => c.n === lv.n)).map((lv) => lv.energy),
+    );
     const vMin = l === 0 ? -Infinity : (-ctx.mu * ctx.Z * ctx.Z) / (2 * l * (l + 1));
     lo = Math.min(lo, l === 0 ? 1.6 * lowest : 1.25 * Math.min(lowest, vMin));
   }
@@ -239,11 +347,23 @@ function potentialAxis(panel: Panel, ctx: Context): AxisDef {
 }
 
 /** A panel of V_eff curves (one per l) with each requested state's level between its turning points. */
-function potentialPanel(panel: Panel, yAxis: AxisDef, frame: Frame, xAxis: AxisDef, rMaxBohr: number, ctx: Context, showXLabels: boolean, placer: LabelPlacer): SceneNode[] {
+function potentialPanel(
+  panel: Panel,
+  yAxis: AxisDef,
+  frame: Frame,
+  xAxis: AxisDef,
+  rMaxBohr: number,
+  ctx: Context,
+  showXLabels: boolean,
+  placer: LabelPlacer,
+): SceneNode[] {
   const { style, unit, energyUnit } = ctx;
   const e = energyUnit.perHartree;
   const byL = curvesByL(panel);
-  const nodes: SceneNode[] = axisNodes(frame, xAxis, yAxis, style, { xLabels: showXLabels, zeroLine: true });
+  const nodes: SceneNode[] = axisNodes(frame, xAxis, yAxis, style, {
+    xLabels: showXLabels,
+    zeroLine: true,
+  });
   const sx = linearScale(xAxis.ticks.min, xAxis.ticks.max, frame.x0, frame.x1);
   const sy = linearScale(yAxis.ticks.min, yAxis.ticks.max, frame.y1, frame.y0);
   const X = (rBohr: number): number => sx(rBohr * unit.perBohr * Math.pow(10, -xAxis.exponent));
@@ -256,7 +376,16 @@ function potentialPanel(panel: Panel, yAxis: AxisDef, frame: Frame, xAxis: AxisD
     const stroke = ctx.colourOf(curves[0]);
     entries.push({ runs: [italic('l'), plain(` = ${l}`)], stroke });
     const nMax = Math.max(...curves.map((c) => c.n));
-    const curve = effectivePotentialCurve({ l, Z: ctx.Z, muRatio: ctx.mu, rMin: rMaxBohr * 1e-4, rMax: rMaxBohr, points: 1200, nMax, spacing: 'log' });
+    const curve = effectivePotentialCurve({
+      l,
+      Z: ctx.Z,
+      muRatio: ctx.mu,
+      rMin: rMaxBohr * 1e-4,
+      rMax: rMaxBohr,
+      points: 1200,
+      nMax,
+      spacing: 'log',
+    });
     const pts = curve.r.map((r, i) => [X(r), Y(curve.V[i])] as [number, number]);
     for (const piece of clipPolyline(pts, frame)) {
       nodes.push({ type: 'path', commands: polylineCommands(piece), stroke, role: 'curve' });
@@ -272,16 +401,30 @@ function potentialPanel(panel: Panel, yAxis: AxisDef, frame: Frame, xAxis: AxisD
   placer.occupy(key.box);
   nodes.push(...key.nodes);
 
-  const cap = capMm(style.smallSizePt);
+  const cap = capHeightMm(style.smallSizePt);
   const levelNodes: SceneNode[] = [];
   for (const { c, level, stroke } of pending) {
     const xa = Math.max(X(level.innerTurningPoint), frame.x0);
     const xb = Math.min(X(level.outerTurningPoint), frame.x1);
     const y = Y(level.energy);
-    levelNodes.push(lineNode(xa, y, xb, y, { colour: stroke.colour, widthPt: style.lineWidthPt * 0.8, dashPt: [3, 1.5] }, 'level-line'));
+    levelNodes.push(
+      lineNode(
+        xa,
+        y,
+        xb,
+        y,
+        { colour: stroke.colour, widthPt: style.lineWidthPt * 0.8, dashPt: [3, 1.5] },
+        'level-line',
+      ),
+    );
     const value = level.energy * e;
     const printed = `${formatSignificant(value, 3)} ${energyUnit.symbol}`;
-    ctx.facts.push({ name: `${runsText(shellRuns(c.n, c.l))} energy`, value, unit: energyUnit.symbol, printed });
+    ctx.facts.push({
+      name: `${runsText(shellRuns(c.n, c.l))} energy`,
+      value,
+      unit: energyUnit.symbol,
+      printed,
+    });
     const runs: TextRun[] = [...shellRuns(c.n, c.l), plain(`: ${printed}`)];
     const size = style.smallSizePt * 0.92;
     const placed = placer.place([
@@ -298,7 +441,8 @@ function potentialPanel(panel: Panel, yAxis: AxisDef, frame: Frame, xAxis: AxisD
 }
 
 export function buildRadialScene(spec: ResolvedFigureSpec): FigureScene {
-  if (spec.kind.type !== 'radial') throw new FigureSpecError('kind.type', `expected "radial", got "${spec.kind.type}"`);
+  if (spec.kind.type !== 'radial')
+    throw new FigureSpecError('kind.type', `expected "radial", got "${spec.kind.type}"`);
   const kind = spec.kind;
   checkCurves(kind);
   const style = figureStyle(spec);
@@ -307,7 +451,12 @@ export function buildRadialScene(spec: ResolvedFigureSpec): FigureScene {
   const strokes = new Map(
     distinct.map((k, i) => [
       k,
-      { colour: style.curveColours[i % style.curveColours.length], widthPt: style.lineWidthPt * 1.4, dashPt: style.curveDashes[i % style.curveDashes.length], join: 'round' as const },
+      {
+        colour: style.curveColours[i % style.curveColours.length],
+        widthPt: style.lineWidthPt * 1.4,
+        dashPt: style.curveDashes[i % style.curveDashes.length],
+        join: 'round' as const,
+      },
     ]),
   );
   const ctx: Context = {
@@ -316,7 +465,10 @@ export function buildRadialScene(spec: ResolvedFigureSpec): FigureScene {
     unit,
     Z: spec.system.Z,
     mu: systemMassRatio(spec),
-    energyUnit: unit.key === 'bohr' ? { symbol: 'hartree', perHartree: 1 } : { symbol: 'eV', perHartree: HARTREE_EV },
+    energyUnit:
+      unit.key === 'bohr'
+        ? { symbol: 'hartree', perHartree: 1 }
+        : { symbol: 'eV', perHartree: HARTREE_EV },
     facts: [],
     colourOf: (c) => strokes.get(curveKey(c)) as Stroke,
   };
@@ -334,26 +486,46 @@ export function buildRadialScene(spec: ResolvedFigureSpec): FigureScene {
   const xEndBohr = (xAxis.ticks.max * Math.pow(10, xAxis.exponent)) / unit.perBohr;
 
   const { widthMm, heightMm } = spec.print;
-  const prepared = panels.map((p) => (p.quantity === 'veff' ? { yAxis: potentialAxis(p, ctx), data: null } : (() => {
-    const data = functionData(p, xEndBohr, ctx);
-    return { yAxis: data.yAxis, data };
-  })()));
+  const prepared = panels.map((p) =>
+    p.quantity === 'veff'
+      ? { yAxis: potentialAxis(p, ctx), data: null }
+      : (() => {
+          const data = functionData(p, xEndBohr, ctx);
+          return { yAxis: data.yAxis, data };
+        })(),
+  );
   const left = MARGIN_MM + Math.max(...prepared.map((p) => yAxisWidthMm(p.yAxis, style)));
   const right = widthMm - MARGIN_MM - 2.5;
   const top = MARGIN_MM + 1.5;
   const bottom = heightMm - MARGIN_MM - xAxisHeightMm(style);
   const panelHeight = (bottom - top - PANEL_GAP_MM * (panels.length - 1)) / panels.length;
   if (panelHeight < 15 || right - left < 25) {
-    throw new FigureSpecError('print', `${widthMm} × ${heightMm} mm is too small for ${panels.length} panel(s) of radial curves`);
+    throw new FigureSpecError(
+      'print',
+      `${widthMm} × ${heightMm} mm is too small for ${panels.length} panel(s) of radial curves`,
+    );
   }
 
   const nodes: SceneNode[] = [];
   panels.forEach((panel, i) => {
-    const frame: Frame = { x0: left, y0: top + i * (panelHeight + PANEL_GAP_MM), x1: right, y1: top + i * (panelHeight + PANEL_GAP_MM) + panelHeight };
-    const placer = new LabelPlacer({ x0: frame.x0 + 0.5, y0: frame.y0 - 1, x1: widthMm - 0.5, y1: frame.y1 - 0.3 });
+    const frame: Frame = {
+      x0: left,
+      y0: top + i * (panelHeight + PANEL_GAP_MM),
+      x1: right,
+      y1: top + i * (panelHeight + PANEL_GAP_MM) + panelHeight,
+    };
+    const placer = new LabelPlacer({
+      x0: frame.x0 + 0.5,
+      y0: frame.y0 - 1,
+      x1: widthMm - 0.5,
+      y1: frame.y1 - 0.3,
+    });
     const last = i === panels.length - 1;
     const { yAxis, data } = prepared[i];
-    const group = data === null ? potentialPanel(panel, yAxis, frame, xAxis, xEndBohr, ctx, last, placer) : functionPanel(panel, data, frame, xAxis, xEndBohr, ctx, last, placer);
+    const group =
+      data === null
+        ? potentialPanel(panel, yAxis, frame, xAxis, xEndBohr, ctx, last, placer)
+        : functionPanel(panel, data, frame, xAxis, xEndBohr, ctx, last, placer);
     nodes.push({ type: 'group', children: group, role: `panel-${panel.quantity}` });
   });
 
@@ -371,13 +543,9 @@ export function buildRadialScene(spec: ResolvedFigureSpec): FigureScene {
   const facts = ctx.facts.map((f) => `${f.name}: ${f.printed}`).join('; ');
   const altText = `${panels.map((p) => `${quantityWords[p.quantity]} of ${p.curves.map((c) => runsText(shellRuns(c.n, c.l))).join(', ')}`).join('; ')}, against r from 0 to ${formatSignificant(xEndBohr * unit.perBohr, 3)} ${unit.symbol}.${facts ? ` ${facts}.` : ''}`;
   const notes: string[] = [];
-  if (spec.system.nucleus !== 'infinite') notes.push('Lengths are printed in units of the Bohr radius a0 (not the reduced-mass radius); the reduced mass enters the curves themselves.');
-  return {
-    widthMm,
-    heightMm,
-    background: spec.print.background,
-    dpi: spec.print.dpi,
-    children: nodes,
-    metadata: { title, altText, facts: ctx.facts, notes },
-  };
+  if (spec.system.nucleus !== 'infinite')
+    notes.push(
+      'Lengths are printed in units of the Bohr radius a0 (not the reduced-mass radius); the reduced mass enters the curves themselves.',
+    );
+  return sceneForSpec(spec, nodes, { title, altText, facts: ctx.facts, notes });
 }

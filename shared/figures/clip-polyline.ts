@@ -33,7 +33,10 @@ export function clipSegment(a: Point, b: Point, f: Frame): [Point, Point] | null
     }
   }
   // Unclipped ends are returned as given, so consecutive segments join exactly.
-  return [t0 === 0 ? a : [a[0] + t0 * dx, a[1] + t0 * dy], t1 === 1 ? b : [a[0] + t1 * dx, a[1] + t1 * dy]];
+  return [
+    t0 === 0 ? a : [a[0] + t0 * dx, a[1] + t0 * dy],
+    t1 === 1 ? b : [a[0] + t1 * dx, a[1] + t1 * dy],
+  ];
 }
 
 /** The pieces of the polyline inside the frame, each with at least two points. */

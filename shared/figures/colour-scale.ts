@@ -72,7 +72,9 @@ export function divergingScale(max: number, positive: string, negative: string):
 
 export function sequentialScale(max: number, positive: string): ColourScale {
   const pos = parseHex(positive);
-  const lut = table((t) => (t <= 0.7 ? mix(WHITE, pos, t / 0.7) : mix(pos, darker(pos), (t - 0.7) / 0.3)));
+  const lut = table((t) =>
+    t <= 0.7 ? mix(WHITE, pos, t / 0.7) : mix(pos, darker(pos), (t - 0.7) / 0.3),
+  );
   return fromTable(lut, 0, max);
 }
 

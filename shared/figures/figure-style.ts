@@ -35,7 +35,14 @@ export function figureStyle(spec: ResolvedFigureSpec): FigureStyle {
     faint: '#b8b8b8',
     positive: look.positiveColour,
     negative: look.negativeColour,
-    curveColours: [look.positiveColour, look.negativeColour, '#4b4fa6', '#8a6d1f', '#6f6f6f', '#a23b72'],
+    curveColours: [
+      look.positiveColour,
+      look.negativeColour,
+      '#4b4fa6',
+      '#8a6d1f',
+      '#6f6f6f',
+      '#a23b72',
+    ],
     curveDashes: [undefined, [4, 1.6], [1.2, 1.4], [4, 1.4, 1.2, 1.4], [2.4, 1.4], [6, 2]],
   };
 }

@@ -28,7 +28,13 @@ export function orbitalStateOf(spec: Pick<ResolvedFigureSpec, 'system' | 'state'
   return {
     Z: spec.system.Z,
     reducedMass: mass === null ? false : { nuclearMassInElectronMasses: mass },
-    terms: spec.state.terms.map((t) => ({ n: t.n, l: t.l, m: t.m, basis: t.basis, weight: t.weight })),
+    terms: spec.state.terms.map((t) => ({
+      n: t.n,
+      l: t.l,
+      m: t.m,
+      basis: t.basis,
+      weight: t.weight,
+    })),
     time: spec.state.time,
   };
 }

@@ -20,7 +20,11 @@ export class LabelPlacer {
   }
 
   avoidCurve(points: readonly (readonly [number, number])[]): void {
-    for (let i = 0; i + 1 < points.length; i++) this.segments.push([[points[i][0], points[i][1]], [points[i + 1][0], points[i + 1][1]]]);
+    for (let i = 0; i + 1 < points.length; i++)
+      this.segments.push([
+        [points[i][0], points[i][1]],
+        [points[i + 1][0], points[i + 1][1]],
+      ]);
   }
 
   fits(box: Box, avoidCurves = true): boolean {
@@ -67,14 +71,20 @@ const LEADER_FROM_MM = 3;
  * clear of other labels and of curves; else the nearest spot clear of labels only.
  * `make(x, y, anchor)` builds the label with its baseline start, middle or end at (x, y).
  */
-export function placeNear(placer: LabelPlacer, at: [number, number], capMm: number, make: (x: number, y: number, anchor: TextNode['anchor']) => TextNode): NearPlacement | null {
+export function placeNear(
+  placer: LabelPlacer,
+  at: [number, number],
+  capMm: number,
+  make: (x: number, y: number, anchor: TextNode['anchor']) => TextNode,
+): NearPlacement | null {
   const candidates: { node: TextNode; distance: number }[] = [];
   for (const r of RINGS_MM) {
     for (let k = 0; k < DIRECTIONS; k++) {
       const a = (2 * Math.PI * k) / DIRECTIONS;
       const dx = r * Math.cos(a);
       const dy = -r * Math.sin(a);
-      const anchor: TextNode['anchor'] = Math.abs(dx) < 0.3 * r ? 'middle' : dx > 0 ? 'start' : 'end';
+      const anchor: TextNode['anchor'] =
+        Math.abs(dx) < 0.3 * r ? 'middle' : dx > 0 ? 'start' : 'end';
       const baseline = at[1] + dy + (dy < -0.3 * r ? 0 : dy > 0.3 * r ? capMm : capMm / 2);
       candidates.push({ node: make(at[0] + dx, baseline, anchor), distance: r });
     }

@@ -16,9 +16,16 @@ function subscriptRuns(text: string, shift: TextRun['shift']): TextRun[] {
   return runs;
 }
 
-export function orbitalRuns(n: number | null, l: number, m: number, basis: 'real' | 'complex'): TextRun[] {
+export function orbitalRuns(
+  n: number | null,
+  l: number,
+  m: number,
+  basis: 'real' | 'complex',
+): TextRun[] {
   const label = orbitalLabel(n, l, m, basis);
-  return label.parts.flatMap((p) => ('t' in p ? [{ text: p.t, shift: 'base' as const }] : subscriptRuns(p.sub, 'sub')));
+  return label.parts.flatMap((p) =>
+    't' in p ? [{ text: p.t, shift: 'base' as const }] : subscriptRuns(p.sub, 'sub'),
+  );
 }
 
 /** "3d": shell and letter only, for radial functions (which do not depend on m). */

@@ -23,6 +23,10 @@ const UNITS: Record<LengthUnitKey, LengthUnit> = {
 
 export function lengthUnit(key: LengthUnitKey): LengthUnit {
   const unit = UNITS[key];
-  if (!unit) throw new FigureSpecError('system.lengthUnit', `must be "bohr", "pm" or "angstrom", got "${String(key)}"`);
+  if (!unit)
+    throw new FigureSpecError(
+      'system.lengthUnit',
+      `must be "bohr", "pm" or "angstrom", got "${String(key)}"`,
+    );
   return unit;
 }

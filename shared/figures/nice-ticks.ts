@@ -37,7 +37,8 @@ function ticksFrom(min: number, step: number, count: number): number[] {
 
 /** Loose labelling of [lo, hi] with about `target` ticks. */
 export function niceTicks(lo: number, hi: number, target = 5): TickSet {
-  if (!Number.isFinite(lo) || !Number.isFinite(hi)) throw new Error(`niceTicks: range must be finite, got ${lo} … ${hi}`);
+  if (!Number.isFinite(lo) || !Number.isFinite(hi))
+    throw new Error(`niceTicks: range must be finite, got ${lo} … ${hi}`);
   if (hi < lo) [lo, hi] = [hi, lo];
   if (hi === lo) {
     const pad = lo === 0 ? 1 : Math.abs(lo) * 0.1;
@@ -51,7 +52,9 @@ export function niceTicks(lo: number, hi: number, target = 5): TickSet {
 /** Ticks inside a fixed range [lo, hi] (the ends stay where they are, ticks fall on nice numbers). */
 export function niceTicksWithin(lo: number, hi: number, target = 5): TickSet {
   const loose = niceTicks(lo, hi, target);
-  const values = loose.values.filter((v) => v >= lo - loose.step * 1e-9 && v <= hi + loose.step * 1e-9);
+  const values = loose.values.filter(
+    (v) => v >= lo - loose.step * 1e-9 && v <= hi + loose.step * 1e-9,
+  );
   return { min: lo, max: hi, step: loose.step, values, decimals: loose.decimals };
 }
 
@@ -60,23 +63,35 @@ function ticksWithStep(lo: number, hi: number, step: number): TickSet {
   const min = Math.floor(lo / step + 1e-9) * step;
   const max = Math.ceil(hi / step - 1e-9) * step;
   const values = ticksFrom(min, step, Math.round((max - min) / step) + 1);
-  return { min: values[0], max: values[values.length - 1], step, values, decimals: decimalsFor(step) };
+  return {
+    min: values[0],
+    max: values[values.length - 1],
+    step,
+    values,
+    decimals: decimalsFor(step),
+  };
 }
 
 /**
  * Our variant of Heckbert's method: the step is the rounded nice number of span/(k − 1) for k = 4 … 7
+ * (or the range given)
  * (without first rounding the span, which can overshoot the axis by half), keeping the tick set that
  * wastes the least span beyond the data; ties go to fewer ticks.
  */
-export function snugTicks(lo: number, hi: number): TickSet {
+export function snugTicks(lo: number, hi: number, fewest = 4, most = 7): TickSet {
   if (hi < lo) [lo, hi] = [hi, lo];
   if (!(hi > lo)) return niceTicks(lo, hi);
   let best: TickSet | null = null;
   const waste = (t: TickSet): number => (t.max - t.min - (hi - lo)) / (t.max - t.min);
-  for (let k = 4; k <= 7; k++) {
+  for (let k = fewest; k <= most; k++) {
     const t = ticksWithStep(lo, hi, niceNumber((hi - lo) / (k - 1), true));
     if (t.values.length > 8) continue;
-    if (!best || waste(t) < waste(best) - 1e-9 || (Math.abs(waste(t) - waste(best)) <= 1e-9 && t.values.length < best.values.length)) best = t;
+    if (
+      !best ||
+      waste(t) < waste(best) - 1e-9 ||
+      (Math.abs(waste(t) - waste(best)) <= 1e-9 && t.values.length < best.values.length)
+    )
+      best = t;
   }
   return best ?? niceTicks(lo, hi);
 }

@@ -5,10 +5,9 @@
  */
 import { formatFixed } from './number-format';
 import { niceTicksWithin, snugTicks, type TickSet } from './nice-ticks';
-import { lineNode, ptToMm, type SceneNode, type TextNode, type TextRun } from './scene';
+import { lineNode, type SceneNode, type TextNode, type TextRun } from './scene';
 import type { FigureStyle } from './figure-style';
-import { FONT_METRICS } from './font-metrics';
-import { layoutRuns } from './text-layout';
+import { capHeightMm, layoutRuns } from './text-layout';
 
 export interface Frame {
   x0: number;
@@ -19,7 +18,12 @@ export interface Frame {
 
 export type Scale = (value: number) => number;
 
-export function linearScale(domainLo: number, domainHi: number, rangeLo: number, rangeHi: number): Scale {
+export function linearScale(
+  domainLo: number,
+  domainHi: number,
+  rangeLo: number,
+  rangeHi: number,
+): Scale {
   const k = (rangeHi - rangeLo) / (domainHi - domainLo);
   return (v) => rangeLo + (v - domainLo) * k;
 }
@@ -45,7 +49,14 @@ export function chooseExponent(lo: number, hi: number): number {
 }
 
 /** An axis over [lo, hi] (values in printed units before the factor); `fixed` keeps the ends. */
-export function makeAxis(lo: number, hi: number, quantity: TextRun[], unit: TextRun[], fixed = false, target = 5): AxisDef {
+export function makeAxis(
+  lo: number,
+  hi: number,
+  quantity: TextRun[],
+  unit: TextRun[],
+  fixed = false,
+  target = 5,
+): AxisDef {
   const exponent = chooseExponent(lo, hi);
   const f = Math.pow(10, -exponent);
   const ticks = fixed ? niceTicksWithin(lo * f, hi * f, target) : snugTicks(lo * f, hi * f);
@@ -68,23 +79,31 @@ export function tickLabel(axis: AxisDef, value: number): string {
   return formatFixed(value, axis.ticks.decimals);
 }
 
-function capHeightMm(sizePt: number): number {
-  const m = FONT_METRICS.regular;
-  return ptToMm((m.capHeight / m.unitsPerEm) * sizePt);
-}
-
 const TICK_LABEL_GAP = 0.9;
 const TITLE_GAP = 1.6;
 
 /** Width needed left of the frame for the y tick labels and the rotated title. */
 export function yAxisWidthMm(axis: AxisDef, style: FigureStyle): number {
-  const widest = Math.max(...axis.ticks.values.map((v) => layoutRuns([{ text: tickLabel(axis, v), shift: 'base' }], style.smallSizePt, 'end').widthMm));
-  return style.tickLengthMm + TICK_LABEL_GAP + widest + TITLE_GAP + capHeightMm(style.fontSizePt) * 1.25;
+  const widest = Math.max(
+    ...axis.ticks.values.map(
+      (v) =>
+        layoutRuns([{ text: tickLabel(axis, v), shift: 'base' }], style.smallSizePt, 'end').widthMm,
+    ),
+  );
+  return (
+    style.tickLengthMm + TICK_LABEL_GAP + widest + TITLE_GAP + capHeightMm(style.fontSizePt) * 1.25
+  );
 }
 
 /** Height needed below the frame for the x tick labels and the title. */
 export function xAxisHeightMm(style: FigureStyle): number {
-  return style.tickLengthMm + TICK_LABEL_GAP + capHeightMm(style.smallSizePt) + TITLE_GAP + capHeightMm(style.fontSizePt) * 1.45;
+  return (
+    style.tickLengthMm +
+    TICK_LABEL_GAP +
+    capHeightMm(style.smallSizePt) +
+    TITLE_GAP +
+    capHeightMm(style.fontSizePt) * 1.45
+  );
 }
 
 export interface AxisDrawOptions {
@@ -94,14 +113,29 @@ export interface AxisDrawOptions {
   zeroLine: boolean;
 }
 
-export function axisNodes(frame: Frame, x: AxisDef, y: AxisDef, style: FigureStyle, options: AxisDrawOptions): SceneNode[] {
+export function axisNodes(
+  frame: Frame,
+  x: AxisDef,
+  y: AxisDef,
+  style: FigureStyle,
+  options: AxisDrawOptions,
+): SceneNode[] {
   const nodes: SceneNode[] = [];
   const sx = linearScale(x.ticks.min, x.ticks.max, frame.x0, frame.x1);
   const sy = linearScale(y.ticks.min, y.ticks.max, frame.y1, frame.y0);
   const axisStroke = { colour: style.ink, widthPt: style.axisWidthPt, cap: 'square' as const };
   const t = style.tickLengthMm;
   if (options.zeroLine && y.ticks.min < 0 && y.ticks.max > 0) {
-    nodes.push(lineNode(frame.x0, sy(0), frame.x1, sy(0), { colour: style.faint, widthPt: style.axisWidthPt }, 'zero-line'));
+    nodes.push(
+      lineNode(
+        frame.x0,
+        sy(0),
+        frame.x1,
+        sy(0),
+        { colour: style.faint, widthPt: style.axisWidthPt },
+        'zero-line',
+      ),
+    );
   }
   nodes.push(lineNode(frame.x0, frame.y1, frame.x1, frame.y1, axisStroke, 'x-axis'));
   nodes.push(lineNode(frame.x0, frame.y0, frame.x0, frame.y1, axisStroke, 'y-axis'));
@@ -110,26 +144,82 @@ export function axisNodes(frame: Frame, x: AxisDef, y: AxisDef, style: FigureSty
     const px = sx(v);
     nodes.push(lineNode(px, frame.y1, px, frame.y1 + t, axisStroke, 'x-tick'));
     if (options.xLabels) {
-      nodes.push(text(px, frame.y1 + t + TICK_LABEL_GAP + capHeightMm(labelSize), [{ text: tickLabel(x, v), shift: 'base' }], labelSize, 'middle', style.ink, 'x-tick-label'));
+      nodes.push(
+        text(
+          px,
+          frame.y1 + t + TICK_LABEL_GAP + capHeightMm(labelSize),
+          [{ text: tickLabel(x, v), shift: 'base' }],
+          labelSize,
+          'middle',
+          style.ink,
+          'x-tick-label',
+        ),
+      );
     }
   }
   for (const v of y.ticks.values) {
     const py = sy(v);
     nodes.push(lineNode(frame.x0 - t, py, frame.x0, py, axisStroke, 'y-tick'));
-    nodes.push(text(frame.x0 - t - TICK_LABEL_GAP, py + capHeightMm(labelSize) / 2, [{ text: tickLabel(y, v), shift: 'base' }], labelSize, 'end', style.ink, 'y-tick-label'));
+    nodes.push(
+      text(
+        frame.x0 - t - TICK_LABEL_GAP,
+        py + capHeightMm(labelSize) / 2,
+        [{ text: tickLabel(y, v), shift: 'base' }],
+        labelSize,
+        'end',
+        style.ink,
+        'y-tick-label',
+      ),
+    );
   }
   if (options.xLabels) {
-    const baseline = frame.y1 + t + TICK_LABEL_GAP + capHeightMm(labelSize) + TITLE_GAP + capHeightMm(style.fontSizePt) * 1.1;
-    nodes.push(text((frame.x0 + frame.x1) / 2, baseline, axisTitleRuns(x), style.fontSizePt, 'middle', style.ink, 'x-title'));
+    const baseline =
+      frame.y1 +
+      t +
+      TICK_LABEL_GAP +
+      capHeightMm(labelSize) +
+      TITLE_GAP +
+      capHeightMm(style.fontSizePt) * 1.1;
+    nodes.push(
+      text(
+        (frame.x0 + frame.x1) / 2,
+        baseline,
+        axisTitleRuns(x),
+        style.fontSizePt,
+        'middle',
+        style.ink,
+        'x-title',
+      ),
+    );
   }
-  const widest = Math.max(...y.ticks.values.map((v) => layoutRuns([{ text: tickLabel(y, v), shift: 'base' }], labelSize, 'end').widthMm));
+  const widest = Math.max(
+    ...y.ticks.values.map(
+      (v) => layoutRuns([{ text: tickLabel(y, v), shift: 'base' }], labelSize, 'end').widthMm,
+    ),
+  );
   const titleX = frame.x0 - t - TICK_LABEL_GAP - widest - TITLE_GAP;
-  const title = text(titleX, (frame.y0 + frame.y1) / 2, axisTitleRuns(y), style.fontSizePt, 'middle', style.ink, 'y-title');
+  const title = text(
+    titleX,
+    (frame.y0 + frame.y1) / 2,
+    axisTitleRuns(y),
+    style.fontSizePt,
+    'middle',
+    style.ink,
+    'y-title',
+  );
   title.rotationDeg = -90;
   nodes.push(title);
   return nodes;
 }
 
-export function text(x: number, y: number, runs: TextRun[], sizePt: number, anchor: TextNode['anchor'], colour: string, role?: string): TextNode {
+export function text(
+  x: number,
+  y: number,
+  runs: TextRun[],
+  sizePt: number,
+  anchor: TextNode['anchor'],
+  colour: string,
+  role?: string,
+): TextNode {
   return { type: 'text', x, y, runs, sizePt, anchor, colour, role };
 }

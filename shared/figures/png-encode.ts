@@ -47,11 +47,19 @@ export interface PngOptions {
   level?: 0 | 1 | 2 | 3 | 4 | 5 | 6 | 7 | 8 | 9;
 }
 
-export function encodePng(width: number, height: number, rgba: Uint8Array, options: PngOptions = {}): Uint8Array {
+export function encodePng(
+  width: number,
+  height: number,
+  rgba: Uint8Array,
+  options: PngOptions = {},
+): Uint8Array {
   if (!Number.isInteger(width) || !Number.isInteger(height) || width < 1 || height < 1) {
-    throw new Error(`encodePng: width and height must be positive integers, got ${width} × ${height}`);
+    throw new Error(
+      `encodePng: width and height must be positive integers, got ${width} × ${height}`,
+    );
   }
-  if (rgba.length !== width * height * 4) throw new Error(`encodePng: expected ${width * height * 4} bytes of RGBA, got ${rgba.length}`);
+  if (rgba.length !== width * height * 4)
+    throw new Error(`encodePng: expected ${width * height * 4} bytes of RGBA, got ${rgba.length}`);
   const opaque = isOpaque(rgba);
   const channels = opaque ? 3 : 4;
   const stride = width * channels;
@@ -80,7 +88,10 @@ export function encodePng(width: number, height: number, rgba: Uint8Array, optio
   hv.setUint32(4, height);
   header[8] = 8;
   header[9] = opaque ? 2 : 6;
-  const parts = [new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk('IHDR', header)];
+  const parts = [
+    new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', header),
+  ];
   if (options.dpi !== undefined) {
     const perMetre = Math.round(options.dpi / 0.0254);
     const phys = new Uint8Array(9);
@@ -90,7 +101,10 @@ export function encodePng(width: number, height: number, rgba: Uint8Array, optio
     phys[8] = 1;
     parts.push(chunk('pHYs', phys));
   }
-  parts.push(chunk('IDAT', zlibSync(raw, { level: options.level ?? 6 })), chunk('IEND', new Uint8Array(0)));
+  parts.push(
+    chunk('IDAT', zlibSync(raw, { level: options.level ?? 6 })),
+    chunk('IEND', new Uint8Array(0)),
+  );
   const total = parts.reduce((s, p) => s + p.length, 0);
   const out = new Uint8Array(total);
   let at = 0;

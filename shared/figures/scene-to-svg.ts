@@ -9,7 +9,15 @@
  */
 import type { FontFace } from './font-metrics';
 import { base64, encodePng } from './png-encode';
-import { MM_PER_PT, type FigureScene, type ImageNode, type PathCommand, type SceneNode, type Stroke, type TextNode } from './scene';
+import {
+  MM_PER_PT,
+  type FigureScene,
+  type ImageNode,
+  type PathCommand,
+  type SceneNode,
+  type Stroke,
+  type TextNode,
+} from './scene';
 import { layoutText } from './text-layout';
 
 /** SVG path data (mm, y down, origin at the run's baseline start) for a string set in one face. */
@@ -29,7 +37,10 @@ export function svgNumber(v: number): string {
 }
 
 export function escapeXml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c] as string);
+  return text.replace(
+    /[&<>"']/g,
+    (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c] as string,
+  );
 }
 
 export function pathData(commands: readonly PathCommand[]): string {
@@ -38,7 +49,8 @@ export function pathData(commands: readonly PathCommand[]): string {
   for (const c of commands) {
     if (c.op === 'move') out.push(`M${n(c.x)} ${n(c.y)}`);
     else if (c.op === 'line') out.push(`L${n(c.x)} ${n(c.y)}`);
-    else if (c.op === 'cubic') out.push(`C${n(c.x1)} ${n(c.y1)} ${n(c.x2)} ${n(c.y2)} ${n(c.x)} ${n(c.y)}`);
+    else if (c.op === 'cubic')
+      out.push(`C${n(c.x1)} ${n(c.y1)} ${n(c.x2)} ${n(c.y2)} ${n(c.x)} ${n(c.y)}`);
     else out.push('Z');
   }
   return out.join('');
@@ -47,7 +59,8 @@ export function pathData(commands: readonly PathCommand[]): string {
 function strokeAttributes(s: Stroke | undefined): string {
   if (!s) return ' stroke="none"';
   let a = ` stroke="${s.colour}" stroke-width="${svgNumber(s.widthPt * MM_PER_PT)}"`;
-  if (s.dashPt && s.dashPt.length > 0) a += ` stroke-dasharray="${s.dashPt.map((d) => svgNumber(d * MM_PER_PT)).join(' ')}"`;
+  if (s.dashPt && s.dashPt.length > 0)
+    a += ` stroke-dasharray="${s.dashPt.map((d) => svgNumber(d * MM_PER_PT)).join(' ')}"`;
   a += ` stroke-linecap="${s.cap ?? 'butt'}" stroke-linejoin="${s.join ?? 'round'}"`;
   if (s.opacity !== undefined && s.opacity < 1) a += ` stroke-opacity="${svgNumber(s.opacity)}"`;
   return a;
@@ -85,7 +98,10 @@ function textElement(node: TextNode, options: SvgOptions): string {
     return `<g transform="${transform}" fill="${node.colour}">${paths}</g>`;
   }
   const spans = layout.runs
-    .map((r) => `<tspan x="${n(r.dx)}" y="${n(r.dy)}" font-size="${n(r.sizePt * MM_PER_PT)}"${faceAttributes(r.face)}>${escapeXml(r.text)}</tspan>`)
+    .map(
+      (r) =>
+        `<tspan x="${n(r.dx)}" y="${n(r.dy)}" font-size="${n(r.sizePt * MM_PER_PT)}"${faceAttributes(r.face)}>${escapeXml(r.text)}</tspan>`,
+    )
     .join('');
   return `<text transform="${transform}" fill="${node.colour}" xml:space="preserve">${spans}</text>`;
 }
@@ -101,7 +117,9 @@ class SvgWriter {
   node(node: SceneNode): string {
     switch (node.type) {
       case 'path': {
-        const fill = node.fill ? ` fill="${node.fill.colour}"${node.fill.opacity !== undefined && node.fill.opacity < 1 ? ` fill-opacity="${svgNumber(node.fill.opacity)}"` : ''}` : ' fill="none"';
+        const fill = node.fill
+          ? ` fill="${node.fill.colour}"${node.fill.opacity !== undefined && node.fill.opacity < 1 ? ` fill-opacity="${svgNumber(node.fill.opacity)}"` : ''}`
+          : ' fill="none"';
         return `<path d="${pathData(node.commands)}"${fill}${strokeAttributes(node.stroke)}/>`;
       }
       case 'text':
@@ -113,7 +131,9 @@ class SvgWriter {
         if (node.clip) {
           const id = `clip${++this.clipCount}`;
           const c = node.clip;
-          this.defs.push(`<clipPath id="${id}"><rect x="${svgNumber(c.x)}" y="${svgNumber(c.y)}" width="${svgNumber(c.width)}" height="${svgNumber(c.height)}"/></clipPath>`);
+          this.defs.push(
+            `<clipPath id="${id}"><rect x="${svgNumber(c.x)}" y="${svgNumber(c.y)}" width="${svgNumber(c.width)}" height="${svgNumber(c.height)}"/></clipPath>`,
+          );
           clip = ` clip-path="url(#${id})"`;
         }
         return `<g${clip}>${node.children.map((c) => this.node(c)).join('')}</g>`;
@@ -130,7 +150,10 @@ export function sceneToSvg(scene: FigureScene, options: SvgOptions = {}): string
   const size = options.pixelSize
     ? `width="${options.pixelSize.width}" height="${options.pixelSize.height}" preserveAspectRatio="none"`
     : `width="${w}mm" height="${h}mm"`;
-  const background = scene.background === 'white' ? `<rect x="0" y="0" width="${w}" height="${h}" fill="#ffffff"/>\n` : '';
+  const background =
+    scene.background === 'white'
+      ? `<rect x="0" y="0" width="${w}" height="${h}" fill="#ffffff"/>\n`
+      : '';
   const style = options.glyphOutlines
     ? ''
     : `<style>text{font-family:${SVG_FONT_FAMILY};font-kerning:none;font-variant-ligatures:none;font-feature-settings:"kern" 0,"liga" 0,"calt" 0}</style>`;

@@ -121,19 +121,45 @@ export const ptToMm = (pt: number): number => pt * MM_PER_PT;
 export const mmToPt = (mm: number): number => mm / MM_PER_PT;
 
 /** A polyline (or polygon when closed) through points [x, y] in mm. */
-export function polylineCommands(points: readonly (readonly [number, number])[], closed = false): PathCommand[] {
+export function polylineCommands(
+  points: readonly (readonly [number, number])[],
+  closed = false,
+): PathCommand[] {
   const commands: PathCommand[] = [];
   points.forEach(([x, y], i) => commands.push({ op: i === 0 ? 'move' : 'line', x, y }));
   if (closed && points.length > 2) commands.push({ op: 'close' });
   return commands;
 }
 
-export function lineNode(x1: number, y1: number, x2: number, y2: number, stroke: Stroke, role?: string): PathNode {
-  return { type: 'path', commands: polylineCommands([[x1, y1], [x2, y2]]), stroke, role };
+export function lineNode(
+  x1: number,
+  y1: number,
+  x2: number,
+  y2: number,
+  stroke: Stroke,
+  role?: string,
+): PathNode {
+  return {
+    type: 'path',
+    commands: polylineCommands([
+      [x1, y1],
+      [x2, y2],
+    ]),
+    stroke,
+    role,
+  };
 }
 
 export function rectCommands(x: number, y: number, width: number, height: number): PathCommand[] {
-  return polylineCommands([[x, y], [x + width, y], [x + width, y + height], [x, y + height]], true);
+  return polylineCommands(
+    [
+      [x, y],
+      [x + width, y],
+      [x + width, y + height],
+      [x, y + height],
+    ],
+    true,
+  );
 }
 
 /** A circle of radius r as four cubic Béziers (κ = 0.5523, the usual quarter-circle constant). */

@@ -54,7 +54,11 @@ export function runSizePt(sizePt: number, shift: TextRun['shift']): number {
   return shift === 'base' ? sizePt : sizePt * SCRIPT_SCALE;
 }
 
-export function layoutRuns(runs: readonly TextRun[], sizePt: number, anchor: TextNode['anchor']): TextLayout {
+export function layoutRuns(
+  runs: readonly TextRun[],
+  sizePt: number,
+  anchor: TextNode['anchor'],
+): TextLayout {
   const placed: PlacedRun[] = [];
   let x = 0;
   let ascent = 0;
@@ -63,7 +67,12 @@ export function layoutRuns(runs: readonly TextRun[], sizePt: number, anchor: Tex
     if (run.text === '') continue;
     const face = runFace(run);
     const size = runSizePt(sizePt, run.shift);
-    const dy = run.shift === 'sub' ? ptToMm(SUB_SHIFT_EM * sizePt) : run.shift === 'sup' ? ptToMm(SUP_SHIFT_EM * sizePt) : 0;
+    const dy =
+      run.shift === 'sub'
+        ? ptToMm(SUB_SHIFT_EM * sizePt)
+        : run.shift === 'sup'
+          ? ptToMm(SUP_SHIFT_EM * sizePt)
+          : 0;
     const widthMm = stringWidthMm(run.text, face, size);
     const m = FONT_METRICS[face];
     ascent = Math.max(ascent, ptToMm((m.capHeight / m.unitsPerEm) * size) - dy);
@@ -74,6 +83,12 @@ export function layoutRuns(runs: readonly TextRun[], sizePt: number, anchor: Tex
   const shift = anchor === 'middle' ? -x / 2 : anchor === 'end' ? -x : 0;
   for (const p of placed) p.dx += shift;
   return { runs: placed, widthMm: x, ascentMm: ascent, descentMm: descent };
+}
+
+/** Height of capital letters at a size, mm: used to centre labels on a point or a line. */
+export function capHeightMm(sizePt: number, face: FontFace = 'regular'): number {
+  const m = FONT_METRICS[face];
+  return ptToMm((m.capHeight / m.unitsPerEm) * sizePt);
 }
 
 export function layoutText(node: Pick<TextNode, 'runs' | 'sizePt' | 'anchor'>): TextLayout {

@@ -24,12 +24,16 @@ describe('energy-level diagram scene', () => {
     const scene = levels('H-1', [{ upper: 3, lower: 2 }]);
     const rows = textsWithRole(scene, 'key-line').map((t) => runsText(t.runs));
     expect(rows).toEqual(['Hα  3→2  656.4696 nm']);
-    expect(textsWithRole(scene, 'key-series').map((t) => runsText(t.runs))).toEqual(['Balmer series']);
+    expect(textsWithRole(scene, 'key-series').map((t) => runsText(t.runs))).toEqual([
+      'Balmer series',
+    ]);
     const vac = scene.metadata.facts.find((f) => f.name === 'Balmer Hα vacuum wavelength');
     expect(Math.abs((vac?.value ?? 0) / 656.469606333244 - 1)).toBeLessThan(1e-11);
     const air = scene.metadata.facts.find((f) => f.name === 'Balmer Hα air wavelength');
     expect(Math.abs((air?.value ?? 0) / 656.288316345 - 1)).toBeLessThan(1e-8);
-    expect(textsWithRole(scene, 'key-air').map((t) => runsText(t.runs))).toEqual(['in air 656.2883 nm']);
+    expect(textsWithRole(scene, 'key-air').map((t) => runsText(t.runs))).toEqual([
+      'in air 656.2883 nm',
+    ]);
     expect(textsWithRole(scene, 'transition-label').map((t) => runsText(t.runs))).toEqual(['Hα']);
   });
 
@@ -45,17 +49,23 @@ describe('energy-level diagram scene', () => {
     const labels = textsWithRole(scene, 'level-label').map((t) => runsText(t.runs));
     expect(labels[0]).toBe('n = 1, \u221213.60 eV');
     expect(labels).toHaveLength(5);
-    expect(textsWithRole(scene, 'limit-label').map((t) => runsText(t.runs))).toEqual(['n = ∞, 0 eV']);
+    expect(textsWithRole(scene, 'limit-label').map((t) => runsText(t.runs))).toEqual([
+      'n = ∞, 0 eV',
+    ]);
   });
 
   it('when Lyman α is asked for, then no air wavelength is printed and the scene says why', () => {
     const scene = levels('H-1', [{ upper: 2, lower: 1 }]);
     expect(textsWithRole(scene, 'key-air')).toHaveLength(0);
-    expect(textsWithRole(scene, 'key-line').map((t) => runsText(t.runs))).toEqual(['Lyα  2→1  121.5684 nm']);
+    expect(textsWithRole(scene, 'key-line').map((t) => runsText(t.runs))).toEqual([
+      'Lyα  2→1  121.5684 nm',
+    ]);
     expect(scene.metadata.notes.some((n) => n.includes('below 200 nm'))).toBe(true);
   });
 
   it('when a transition goes upward, then the error names the field', () => {
-    expect(() => levels('H-1', [{ upper: 2, lower: 3 }])).toThrow(new FigureSpecError('kind.transitions[0].upper', 'must be greater than lower = 3, got 2'));
+    expect(() => levels('H-1', [{ upper: 2, lower: 3 }])).toThrow(
+      new FigureSpecError('kind.transitions[0].upper', 'must be greater than lower = 3, got 2'),
+    );
   });
 });

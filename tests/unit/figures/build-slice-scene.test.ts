@@ -19,7 +19,12 @@ function pixel(image: ImageNode, fx: number, fy: number): number[] {
 describe('slice scene', () => {
   it('when 2p_z ψ is sliced in the xz-plane, then the raster has the print dpi, +z is the positive colour and −z the negative', () => {
     const scene = buildFigureScene(
-      resolved({ schemaVersion: 1, state: { terms: [{ n: 2, l: 1, m: 0 }] }, kind: { type: 'slice', plane: 'xz', quantity: 'psi' }, print }),
+      resolved({
+        schemaVersion: 1,
+        state: { terms: [{ n: 2, l: 1, m: 0 }] },
+        kind: { type: 'slice', plane: 'xz', quantity: 'psi' },
+        print,
+      }),
     );
     const image = nodesWithRole(scene.children, 'colour-field')[0] as ImageNode;
     expect(image.width).toBeCloseTo((image.pixelWidth * 25.4) / 300, 9);
@@ -29,9 +34,19 @@ describe('slice scene', () => {
     const below = pixel(image, 0.5, 0.65);
     expect(above[0]).toBeGreaterThan(above[2]);
     expect(below[2]).toBeGreaterThan(below[0]);
-    expect(pixel(image, 0.02, 0.5).slice(0, 3).every((c) => c > 240)).toBe(true);
-    expect(textsWithRole(scene, 'title')[0].runs.map((r) => r.text).join('')).toBe('2pz, ψ in the xz-plane');
-    expect(scene.metadata.notes.some((n) => n.includes('do not enclose those fractions'))).toBe(true);
+    expect(
+      pixel(image, 0.02, 0.5)
+        .slice(0, 3)
+        .every((c) => c > 240),
+    ).toBe(true);
+    expect(
+      textsWithRole(scene, 'title')[0]
+        .runs.map((r) => r.text)
+        .join(''),
+    ).toBe('2pz, ψ in the xz-plane');
+    expect(scene.metadata.notes.some((n) => n.includes('do not enclose those fractions'))).toBe(
+      true,
+    );
   });
 
   it('when 1s density contours enclose 90 %, then the contour is a circle of radius 2.661 bohr (REFERENCE §9), to the grid accuracy', () => {
@@ -39,7 +54,13 @@ describe('slice scene', () => {
       resolved({
         schemaVersion: 1,
         state: { terms: [{ n: 1, l: 0, m: 0 }] },
-        kind: { type: 'slice', plane: 'xy', quantity: 'density', extent: 5, contours: { mode: 'enclosed', fractions: [0.9] } },
+        kind: {
+          type: 'slice',
+          plane: 'xy',
+          quantity: 'density',
+          extent: 5,
+          contours: { mode: 'enclosed', fractions: [0.9] },
+        },
         print,
       }),
     );
@@ -62,11 +83,18 @@ describe('slice scene', () => {
       resolved({
         schemaVersion: 1,
         state: { terms: [{ n: 1, l: 0, m: 0 }] },
-        kind: { type: 'slice', plane: 'xy', quantity: 'density', contours: { mode: 'levels', levels: [0.01] } },
+        kind: {
+          type: 'slice',
+          plane: 'xy',
+          quantity: 'density',
+          contours: { mode: 'levels', levels: [0.01] },
+        },
         print,
       }),
     );
-    expect(scene.metadata.notes.some((n) => n.includes('does not enclose any stated probability'))).toBe(true);
+    expect(
+      scene.metadata.notes.some((n) => n.includes('does not enclose any stated probability')),
+    ).toBe(true);
   });
 
   it('when ψ is complex and asked for, then the error names kind.quantity', () => {

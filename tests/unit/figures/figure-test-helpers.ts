@@ -4,7 +4,10 @@ import type { FigureScene, SceneNode, TextNode } from '../../../shared/figures/s
 import { runsText, walkScene } from '../../../shared/figures/scene';
 import { figureSpecSchema, type FigureSpecInput } from '../../../shared/spec/figure-spec';
 import { defaultHouseStyle } from '../../../shared/spec/house-style';
-import { resolveFigureSpec, type ResolvedFigureSpec } from '../../../shared/spec/resolve-figure-spec';
+import {
+  resolveFigureSpec,
+  type ResolvedFigureSpec,
+} from '../../../shared/spec/resolve-figure-spec';
 
 export function resolved(input: FigureSpecInput): ResolvedFigureSpec {
   return resolveFigureSpec(figureSpecSchema.parse(input), defaultHouseStyle);

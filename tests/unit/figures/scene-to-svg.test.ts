@@ -20,7 +20,13 @@ function sampleScene(): FigureScene {
       {
         type: 'group',
         clip: { x: 0, y: 0, width: 30, height: 30 },
-        children: [{ type: 'path', commands: circleCommands(20, 15, 5), stroke: { colour: '#c2410c', widthPt: 1, dashPt: [2, 1] } }],
+        children: [
+          {
+            type: 'path',
+            commands: circleCommands(20, 15, 5),
+            stroke: { colour: '#c2410c', widthPt: 1, dashPt: [2, 1] },
+          },
+        ],
       },
       {
         type: 'text',
@@ -51,7 +57,11 @@ describe('scene to SVG', () => {
   });
 
   it('when parsed by librsvg, then it renders at the size it states', async () => {
-    const meta = await sharp(Buffer.from(sceneToSvg(sampleScene(), { glyphOutlines, pixelSize: { width: 400, height: 300 } }))).metadata();
+    const meta = await sharp(
+      Buffer.from(
+        sceneToSvg(sampleScene(), { glyphOutlines, pixelSize: { width: 400, height: 300 } }),
+      ),
+    ).metadata();
     expect([meta.width, meta.height]).toEqual([400, 300]);
     const plain = await sharp(Buffer.from(sceneToSvg(sampleScene())), { density: 72 }).metadata();
     expect(plain.format).toBe('svg');

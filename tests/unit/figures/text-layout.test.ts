@@ -17,8 +17,19 @@ describe('font metrics and text layout', () => {
     const faces = ['regular', 'italic', 'semibold', 'semibold-italic'] as const;
     for (const face of faces) {
       const font = fontkit.openSync(`assets/fonts/inter-${face}.otf`);
-      for (const text of ['3d', 'r / bohr', 'ψ / bohr−3/2', 'Hα 656.47 nm', 'AVAWTo 0123456789', 'Å × 10³ · θφ']) {
-        const expected = ptToMm((font.layout(text, { kern: false, liga: false, calt: false }).advanceWidth / font.unitsPerEm) * 8);
+      for (const text of [
+        '3d',
+        'r / bohr',
+        'ψ / bohr−3/2',
+        'Hα 656.47 nm',
+        'AVAWTo 0123456789',
+        'Å × 10³ · θφ',
+      ]) {
+        const expected = ptToMm(
+          (font.layout(text, { kern: false, liga: false, calt: false }).advanceWidth /
+            font.unitsPerEm) *
+            8,
+        );
         expect(stringWidthMm(text, face, 8), `${face} "${text}"`).toBeCloseTo(expected, 9);
       }
       expect(FONT_METRICS[face].unitsPerEm).toBe(font.unitsPerEm);

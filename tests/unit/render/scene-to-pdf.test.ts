@@ -12,7 +12,13 @@ import { resolved } from '../figures/figure-test-helpers';
 const spec = resolved({
   schemaVersion: 1,
   state: { terms: [{ n: 2, l: 1, m: 0 }] },
-  kind: { type: 'radial', curves: [{ n: 2, l: 0, quantity: 'r2R2' }, { n: 2, l: 1, quantity: 'r2R2' }] },
+  kind: {
+    type: 'radial',
+    curves: [
+      { n: 2, l: 0, quantity: 'r2R2' },
+      { n: 2, l: 1, quantity: 'r2R2' },
+    ],
+  },
   print: { widthMm: 84, heightMm: 61.5, dpi: 600 },
 });
 
@@ -39,12 +45,14 @@ describe('scene to PDF', () => {
   it('when fonts are listed, then every face used is Inter, embedded and subset', () => {
     const rows = execFileSync('pdffonts', [file], { encoding: 'utf8' }).trim().split('\n').slice(2);
     expect(rows.length).toBeGreaterThanOrEqual(2);
-    for (const row of rows) expect(row).toMatch(/^[A-Z]{6}\+Inter-\S+\s+CID Type 0C\s+Identity-H\s+yes yes yes/);
+    for (const row of rows)
+      expect(row).toMatch(/^[A-Z]{6}\+Inter-\S+\s+CID Type 0C\s+Identity-H\s+yes yes yes/);
   });
 
   it('when text is extracted, then axis titles, legend and the computed annotations are there', () => {
     const text = execFileSync('pdftotext', [file, '-'], { encoding: 'utf8' });
-    for (const label of ['r / bohr', 'bohr−1', '2s', '2p', 'mp = 4.00 bohr', '2.00 bohr']) expect(text).toContain(label);
+    for (const label of ['r / bohr', 'bohr−1', '2s', '2p', 'mp = 4.00 bohr', '2.00 bohr'])
+      expect(text).toContain(label);
   });
 
   it('when rendered twice, then the bytes are identical', async () => {

@@ -20,7 +20,13 @@ describe('scene to PNG', () => {
     const png = await sceneToPng(buildFigureScene(radialSpec('white')));
     const meta = await sharp(png).metadata();
     expect(pixelSize({ widthMm: 84, heightMm: 60, dpi: 300 })).toEqual({ width: 992, height: 709 });
-    expect([meta.format, meta.width, meta.height, meta.density, meta.space]).toEqual(['png', 992, 709, 300, 'srgb']);
+    expect([meta.format, meta.width, meta.height, meta.density, meta.space]).toEqual([
+      'png',
+      992,
+      709,
+      300,
+      'srgb',
+    ]);
     const { data } = await sharp(png).raw().toBuffer({ resolveWithObject: true });
     expect([...data.subarray(0, 4)]).toEqual([255, 255, 255, 255]);
   });
