@@ -17,7 +17,10 @@ import { OrbitalScene } from './features/orbital-view/components/orbital-scene';
 import { axisEnds, AXIS_NAMES } from './features/orbital-view/components/axes';
 import { pixelsPerBohrAtNucleus } from './features/orbital-view/components/scale-bar';
 import { scaleBarLayout } from './features/orbital-view/utils/scale-bar-layout';
-import { projectToPixels, type PrintProjection } from './features/orbital-view/utils/print-projection';
+import {
+  projectToPixels,
+  type PrintProjection,
+} from './features/orbital-view/utils/print-projection';
 
 export interface PrintJob {
   /** A figure spec (resolved, or stored: missing look and print fields take the product defaults). */
@@ -68,7 +71,9 @@ function fail(message: string): void {
 
 function checkSide(value: unknown, field: string): number {
   if (typeof value !== 'number' || !Number.isInteger(value) || value < 1 || value > MAX_SIDE_PX) {
-    throw new Error(`${field}: must be an integer number of pixels from 1 to ${MAX_SIDE_PX}, got ${String(value)}`);
+    throw new Error(
+      `${field}: must be an integer number of pixels from 1 to ${MAX_SIDE_PX}, got ${String(value)}`,
+    );
   }
   return value;
 }
@@ -87,7 +92,8 @@ function print(job: PrintJob): Promise<PrintResult> {
         throw new Error(`spec.${issue.path.join('.')}: ${issue.message}`);
       }
       const spec = resolveFigureSpec(parsed.data, defaultHouseStyle);
-      document.body.style.background = spec.print.background === 'white' ? '#ffffff' : 'transparent';
+      document.body.style.background =
+        spec.print.background === 'white' ? '#ffffff' : 'transparent';
       const started = performance.now();
       const geometry = buildOrbitalGeometry(spec);
       const geometryMs = performance.now() - started;
@@ -122,7 +128,12 @@ function ReadySignal({ job }: { job: PreparedJob }) {
   useFrame((state) => {
     if (!armed.current) return;
     const canvas = state.gl.domElement;
-    if (state.size.width !== job.widthPx || state.size.height !== job.heightPx || canvas.width !== job.widthPx || canvas.height !== job.heightPx) {
+    if (
+      state.size.width !== job.widthPx ||
+      state.size.height !== job.heightPx ||
+      canvas.width !== job.widthPx ||
+      canvas.height !== job.heightPx
+    ) {
       state.invalidate();
       return;
     }
@@ -135,7 +146,10 @@ function ReadySignal({ job }: { job: PreparedJob }) {
 
 function printResult(job: PreparedJob, camera: Camera): PrintResult {
   const { spec, geometry, widthPx, heightPx } = job;
-  const pixelsPerBohr = pixelsPerBohrAtNucleus(camera as Parameters<typeof pixelsPerBohrAtNucleus>[0], heightPx);
+  const pixelsPerBohr = pixelsPerBohrAtNucleus(
+    camera as Parameters<typeof pixelsPerBohrAtNucleus>[0],
+    heightPx,
+  );
   return {
     facts: geometry.facts,
     notes: geometry.notes,
@@ -144,8 +158,16 @@ function printResult(job: PreparedJob, camera: Camera): PrintResult {
       heightPx,
       pixelsPerBohr,
       nucleus: projectToPixels(camera, [0, 0, 0], widthPx, heightPx),
-      axes: spec.look.showAxes ? axisEnds(geometry.radius).map((end, i) => ({ name: AXIS_NAMES[i], end: projectToPixels(camera, end, widthPx, heightPx) })) : [],
-      scaleBar: spec.look.showScaleBar && geometry.hasLength ? scaleBarLayout(pixelsPerBohr, widthPx, heightPx, spec.system.lengthUnit) : null,
+      axes: spec.look.showAxes
+        ? axisEnds(geometry.radius).map((end, i) => ({
+            name: AXIS_NAMES[i],
+            end: projectToPixels(camera, end, widthPx, heightPx),
+          }))
+        : [],
+      scaleBar:
+        spec.look.showScaleBar && geometry.hasLength
+          ? scaleBarLayout(pixelsPerBohr, widthPx, heightPx, spec.system.lengthUnit)
+          : null,
     },
     ms: { geometry: job.geometryMs, draw: performance.now() - job.startedAt },
   };
@@ -188,7 +210,9 @@ function PrintApp() {
           window.__lobewrightCapture = () => gl.domElement.toDataURL('image/png');
         }}
       >
-        {spec.print.background === 'white' ? <color attach="background" args={['#ffffff']} /> : null}
+        {spec.print.background === 'white' ? (
+          <color attach="background" args={['#ffffff']} />
+        ) : null}
         <OrbitalScene
           key={job.token}
           geometry={geometry}
@@ -213,7 +237,9 @@ async function firstJob(): Promise<PrintJob | null> {
 }
 
 window.addEventListener('error', (event) => fail(event.message));
-window.addEventListener('unhandledrejection', (event) => fail(String((event.reason as Error)?.message ?? event.reason)));
+window.addEventListener('unhandledrejection', (event) =>
+  fail(String((event.reason as Error)?.message ?? event.reason)),
+);
 
 const root = document.getElementById('root');
 if (!root) throw new Error('print-3d.html must contain #root');

@@ -59,7 +59,14 @@ export interface Render3dResult {
    * Milliseconds: browser start (0 when warm), print page load (0 when warm), geometry and drawing
    * in the page (draw, of which geometry), PNG capture, total.
    */
-  ms: { launch: number; page: number; draw: number; geometry: number; capture: number; total: number };
+  ms: {
+    launch: number;
+    page: number;
+    draw: number;
+    geometry: number;
+    capture: number;
+    total: number;
+  };
 }
 
 /** Pixels along one side: round(mm / 25.4 × dpi). */
@@ -75,14 +82,22 @@ function checkSize(spec: ResolvedFigureSpec): { widthPx: number; heightPx: numbe
     ['print.widthMm', widthPx, spec.print.widthMm],
     ['print.heightMm', heightPx, spec.print.heightMm],
   ] as const) {
-    if (px > MAX_3D_SIDE_PX) fields[field] = `${mm} mm at ${spec.print.dpi} dpi is ${px} px; 3D figures are limited to ${MAX_3D_SIDE_PX} px per side`;
+    if (px > MAX_3D_SIDE_PX)
+      fields[field] =
+        `${mm} mm at ${spec.print.dpi} dpi is ${px} px; 3D figures are limited to ${MAX_3D_SIDE_PX} px per side`;
     if (px < 1) fields[field] = `${mm} mm at ${spec.print.dpi} dpi is less than one pixel`;
   }
   if (Object.keys(fields).length === 0 && widthPx * heightPx > MAX_3D_PIXELS) {
-    fields['print.dpi'] = `${widthPx} × ${heightPx} px exceeds the 3D limit of ${MAX_3D_PIXELS / 1e6} million pixels; lower the dpi or the size`;
+    fields['print.dpi'] =
+      `${widthPx} × ${heightPx} px exceeds the 3D limit of ${MAX_3D_PIXELS / 1e6} million pixels; lower the dpi or the size`;
   }
   if (Object.keys(fields).length > 0) {
-    throw new AppError(422, 'figure_too_large', `the 3D figure is too large to render: ${Object.values(fields).join('; ')}`, fields);
+    throw new AppError(
+      422,
+      'figure_too_large',
+      `the 3D figure is too large to render: ${Object.values(fields).join('; ')}`,
+      fields,
+    );
   }
   return { widthPx, heightPx };
 }
@@ -109,7 +124,9 @@ function startStaticServer(root: string): Promise<{ server: Server; base: string
       response.writeHead(404).end();
       return;
     }
-    response.writeHead(200, { 'content-type': CONTENT_TYPES[path.extname(file)] ?? 'application/octet-stream' });
+    response.writeHead(200, {
+      'content-type': CONTENT_TYPES[path.extname(file)] ?? 'application/octet-stream',
+    });
     createReadStream(file).pipe(response);
   });
   return new Promise((resolve, reject) => {
@@ -139,12 +156,25 @@ let warm: Promise<Warm> | null = null;
 
 async function launch(root: string): Promise<Warm> {
   if (!existsSync(path.join(root, 'print-3d.html'))) {
-    throw new AppError(500, 'client_not_built', `${root}/print-3d.html is missing: build the client first (npx vite build)`);
+    throw new AppError(
+      500,
+      'client_not_built',
+      `${root}/print-3d.html is missing: build the client first (npx vite build)`,
+    );
   }
-  if (!existsSync(CHROMIUM_PATH)) throw new AppError(500, 'no_browser', `${CHROMIUM_PATH} is missing: install Debian's chromium package`);
+  if (!existsSync(CHROMIUM_PATH))
+    throw new AppError(
+      500,
+      'no_browser',
+      `${CHROMIUM_PATH} is missing: install Debian's chromium package`,
+    );
   const { server, base } = await startStaticServer(root);
   try {
-    const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_ARGS });
+    const browser = await chromium.launch({
+      executablePath: CHROMIUM_PATH,
+      headless: true,
+      args: CHROMIUM_ARGS,
+    });
     browser.on('disconnected', () => {
       server.close();
       warm = null;
@@ -152,7 +182,13 @@ async function launch(root: string): Promise<Warm> {
     return { browser, server, base, root, page: null, queue: Promise.resolve() };
   } catch (error) {
     server.close();
-    throw new AppError(500, 'browser_failed', `Chromium did not start: ${(error as Error).message}`, undefined, { cause: error });
+    throw new AppError(
+      500,
+      'browser_failed',
+      `Chromium did not start: ${(error as Error).message}`,
+      undefined,
+      { cause: error },
+    );
   }
 }
 
@@ -160,7 +196,8 @@ async function warmBrowser(root: string): Promise<{ warm: Warm; launchMs: number
   const started = performance.now();
   if (warm) {
     const current = await warm;
-    if (current.root === root && current.browser.isConnected()) return { warm: current, launchMs: 0 };
+    if (current.root === root && current.browser.isConnected())
+      return { warm: current, launchMs: 0 };
     await closeRender3d();
   }
   warm = launch(root);
@@ -183,16 +220,28 @@ export async function closeRender3d(): Promise<void> {
 
 process.once('beforeExit', () => void closeRender3d());
 
-async function printPage(w: Warm, widthPx: number, heightPx: number, timeoutMs: number, pageErrors: string[]): Promise<Page> {
+async function printPage(
+  w: Warm,
+  widthPx: number,
+  heightPx: number,
+  timeoutMs: number,
+  pageErrors: string[],
+): Promise<Page> {
   if (w.page && !w.page.isClosed()) {
     await w.page.setViewportSize({ width: widthPx, height: heightPx });
     return w.page;
   }
-  const context = await w.browser.newContext({ viewport: { width: widthPx, height: heightPx }, deviceScaleFactor: 1 });
+  const context = await w.browser.newContext({
+    viewport: { width: widthPx, height: heightPx },
+    deviceScaleFactor: 1,
+  });
   const page = await context.newPage();
   page.on('pageerror', (error) => pageErrors.push(error.message));
   await page.goto(`${w.base}/print-3d.html`, { waitUntil: 'load', timeout: timeoutMs });
-  await page.waitForFunction(() => typeof window.__lobewrightPrint === 'function', null, { timeout: timeoutMs, polling: 10 });
+  await page.waitForFunction(() => typeof window.__lobewrightPrint === 'function', null, {
+    timeout: timeoutMs,
+    polling: 10,
+  });
   w.page = page;
   return page;
 }
@@ -200,20 +249,33 @@ async function printPage(w: Warm, widthPx: number, heightPx: number, timeoutMs: 
 async function discardPage(w: Warm): Promise<void> {
   const page = w.page;
   w.page = null;
-  await page?.context().close().catch(() => undefined);
+  await page
+    ?.context()
+    .close()
+    .catch(() => undefined);
 }
 
 // ---- one figure -----------------------------------------------------------------------------
 
-export async function render3dPng(spec: ResolvedFigureSpec, opts: Render3dOptions = {}): Promise<Render3dResult> {
+export async function render3dPng(
+  spec: ResolvedFigureSpec,
+  opts: Render3dOptions = {},
+): Promise<Render3dResult> {
   const started = performance.now();
-  if (!THREE_D_KINDS.has(spec.kind.type) || (spec.kind.type === 'angular' && spec.kind.mode !== 'surface')) {
-    throw new AppError(422, 'not_3d', `kind.type: a ${spec.kind.type} figure is not drawn in 3D`, { 'kind.type': 'not a 3D kind' });
+  if (
+    !THREE_D_KINDS.has(spec.kind.type) ||
+    (spec.kind.type === 'angular' && spec.kind.mode !== 'surface')
+  ) {
+    throw new AppError(422, 'not_3d', `kind.type: a ${spec.kind.type} figure is not drawn in 3D`, {
+      'kind.type': 'not a 3D kind',
+    });
   }
   const { widthPx, heightPx } = checkSize(spec);
   const timeoutMs = opts.timeoutMs ?? DEFAULT_TIMEOUT_MS;
   const job: PrintJob = {
-    spec: opts.background ? { ...spec, print: { ...spec.print, background: opts.background } } : spec,
+    spec: opts.background
+      ? { ...spec, print: { ...spec.print, background: opts.background } }
+      : spec,
     widthPx,
     heightPx,
   };
@@ -227,10 +289,16 @@ export async function render3dPng(spec: ResolvedFigureSpec, opts: Render3dOption
         const page = await printPage(w, widthPx, heightPx, timeoutMs, pageErrors);
         const drawStarted = performance.now();
         const pageMs = drawStarted - pageStarted;
-        const result = await page.evaluate((j) => window.__lobewrightPrint!(j), job).catch((error: Error) => {
-          const message = error.message.replace(/^page\.evaluate: (Error: )?/, '').split('\n')[0];
-          throw new AppError(422, 'render_failed', `the 3D figure could not be drawn: ${message}`);
-        });
+        const result = await page
+          .evaluate((j) => window.__lobewrightPrint!(j), job)
+          .catch((error: Error) => {
+            const message = error.message.replace(/^page\.evaluate: (Error: )?/, '').split('\n')[0];
+            throw new AppError(
+              422,
+              'render_failed',
+              `the 3D figure could not be drawn: ${message}`,
+            );
+          });
         const drawMs = performance.now() - drawStarted;
         const captureStarted = performance.now();
         const dataUrl = await page.evaluate(() => window.__lobewrightCapture!());
@@ -238,7 +306,17 @@ export async function render3dPng(spec: ResolvedFigureSpec, opts: Render3dOption
         return { png, result, pageMs, drawMs, captureMs: performance.now() - captureStarted };
       })();
       const timeout = new Promise<never>((_, reject) => {
-        timer = setTimeout(() => reject(new AppError(504, 'render_timeout', `the 3D figure took longer than ${timeoutMs} ms to render`)), timeoutMs);
+        timer = setTimeout(
+          () =>
+            reject(
+              new AppError(
+                504,
+                'render_timeout',
+                `the 3D figure took longer than ${timeoutMs} ms to render`,
+              ),
+            ),
+          timeoutMs,
+        );
       });
       const { png, result, pageMs, drawMs, captureMs } = await Promise.race([work, timeout]);
       checkPng(png, widthPx, heightPx);
@@ -249,14 +327,27 @@ export async function render3dPng(spec: ResolvedFigureSpec, opts: Render3dOption
         facts: result.facts,
         notes: result.notes,
         projection: result.projection,
-        ms: { launch: launchMs, page: pageMs, draw: drawMs, geometry: result.ms.geometry, capture: captureMs, total: performance.now() - started },
+        ms: {
+          launch: launchMs,
+          page: pageMs,
+          draw: drawMs,
+          geometry: result.ms.geometry,
+          capture: captureMs,
+          total: performance.now() - started,
+        },
       };
     } catch (error) {
       // A page that failed or timed out may be in any state: the next figure gets a fresh one.
       await discardPage(w);
       if (error instanceof AppError) throw error;
       const detail = pageErrors.length > 0 ? ` (page: ${pageErrors.join('; ')})` : '';
-      throw new AppError(500, 'render_failed', `the 3D figure could not be rendered: ${(error as Error).message}${detail}`, undefined, { cause: error });
+      throw new AppError(
+        500,
+        'render_failed',
+        `the 3D figure could not be rendered: ${(error as Error).message}${detail}`,
+        undefined,
+        { cause: error },
+      );
     } finally {
       clearTimeout(timer);
     }
@@ -269,8 +360,14 @@ export async function render3dPng(spec: ResolvedFigureSpec, opts: Render3dOption
 /** The PNG's IHDR must say exactly the size asked for. */
 function checkPng(png: Buffer, widthPx: number, heightPx: number): void {
   const signature = '89504e470d0a1a0a';
-  if (png.length < 24 || png.subarray(0, 8).toString('hex') !== signature) throw new AppError(500, 'render_failed', 'the browser returned no PNG');
+  if (png.length < 24 || png.subarray(0, 8).toString('hex') !== signature)
+    throw new AppError(500, 'render_failed', 'the browser returned no PNG');
   const w = png.readUInt32BE(16);
   const h = png.readUInt32BE(20);
-  if (w !== widthPx || h !== heightPx) throw new AppError(500, 'render_failed', `the browser drew ${w} × ${h} px instead of ${widthPx} × ${heightPx} px`);
+  if (w !== widthPx || h !== heightPx)
+    throw new AppError(
+      500,
+      'render_failed',
+      `the browser drew ${w} × ${h} px instead of ${widthPx} × ${heightPx} px`,
+    );
 }

@@ -53,7 +53,9 @@ function buildSampler(n: number, l: number, zEff: number): RadialSampler {
   const logG = (rho: number): number => {
     if (rho === 0) return -Infinity;
     const poly = assocLaguerre(k, alpha, rho);
-    return poly === 0 ? -Infinity : (2 * l + 2) * Math.log(rho) - rho + 2 * Math.log(Math.abs(poly));
+    return poly === 0
+      ? -Infinity
+      : (2 * l + 2) * Math.log(rho) - rho + 2 * Math.log(Math.abs(poly));
   };
   const logEnds = new Float64Array(INTERVALS + 1);
   const logMids = new Float64Array(INTERVALS);

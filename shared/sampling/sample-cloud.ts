@@ -63,10 +63,16 @@ interface TermDraw {
 export function sampleCloud(state: CompiledState, options: CloudOptions): Cloud {
   const { count, seed } = options;
   if (!Number.isInteger(count) || count < 1 || count > MAX_CLOUD_POINTS) {
-    throw new OrbitalInputError('count', `must be an integer from 1 to ${MAX_CLOUD_POINTS}, got ${String(count)}`);
+    throw new OrbitalInputError(
+      'count',
+      `must be an integer from 1 to ${MAX_CLOUD_POINTS}, got ${String(count)}`,
+    );
   }
   if (!Number.isInteger(seed) || seed < 0 || seed > 0xffffffff) {
-    throw new OrbitalInputError('seed', `must be an integer from 0 to ${0xffffffff}, got ${String(seed)}`);
+    throw new OrbitalInputError(
+      'seed',
+      `must be an integer from 0 to ${0xffffffff}, got ${String(seed)}`,
+    );
   }
   const terms = state.realTerms;
   const K = terms.length;
@@ -100,7 +106,10 @@ export function sampleCloud(state: CompiledState, options: CloudOptions): Cloud 
   let done = 0;
   while (done < count) {
     if (candidates >= maxCandidates) {
-      throw new OrbitalInputError('state', `the cloud sampler accepted too few candidates (${done} of ${count} after ${candidates})`);
+      throw new OrbitalInputError(
+        'state',
+        `the cloud sampler accepted too few candidates (${done} of ${count} after ${candidates})`,
+      );
     }
     candidates++;
     const k = K === 1 ? 0 : pickTerm(pickCumulative, random.next());
@@ -161,7 +170,19 @@ function drawFromTerm(draw: TermDraw, random: RandomSource, out: Float64Array): 
 }
 
 /** φ_k(x) = R_nl(r) S_lm(r̂), computed as in accumulateTerms. */
-function termValue(term: CompiledRealTerm, x: number, y: number, z: number, r: number, r2: number): number {
+function termValue(
+  term: CompiledRealTerm,
+  x: number,
+  y: number,
+  z: number,
+  r: number,
+  r2: number,
+): number {
   const rho = term.a * r;
-  return term.radialScale * Math.exp(-rho / 2) * assocLaguerre(term.degree, term.alpha, rho) * solidHarmonicValue(term.harmonic, x, y, z, r2);
+  return (
+    term.radialScale *
+    Math.exp(-rho / 2) *
+    assocLaguerre(term.degree, term.alpha, rho) *
+    solidHarmonicValue(term.harmonic, x, y, z, r2)
+  );
 }

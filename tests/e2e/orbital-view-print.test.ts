@@ -19,14 +19,21 @@ function spec(overrides: Partial<FigureSpecInput> = {}): ResolvedFigureSpec {
     kind: { type: 'isosurface', enclosed: 0.9, grid: 64 },
     // Azimuth −90°, elevation 0°: looking along +y, x to the right and z up.
     view: { azimuthDeg: -90, elevationDeg: 0, lighting: 'flat' },
-    look: { positiveColour: POSITIVE, negativeColour: NEGATIVE, showAxes: false, showScaleBar: false },
+    look: {
+      positiveColour: POSITIVE,
+      negativeColour: NEGATIVE,
+      showAxes: false,
+      showScaleBar: false,
+    },
     print: { widthMm: 40, heightMm: 40, dpi: 150, background: 'transparent' },
     ...overrides,
   };
   return resolveFigureSpec(figureSpecSchema.parse(input), defaultHouseStyle);
 }
 
-async function pixels(png: Buffer): Promise<{ width: number; height: number; at: (x: number, y: number) => number[] }> {
+async function pixels(
+  png: Buffer,
+): Promise<{ width: number; height: number; at: (x: number, y: number) => number[] }> {
   const { data, info } = await sharp(png).ensureAlpha().raw().toBuffer({ resolveWithObject: true });
   return {
     width: info.width,
@@ -43,7 +50,10 @@ const rgb = (hex: string): number[] => [1, 3, 5].map((i) => parseInt(hex.slice(i
 function expectColour(got: number[], hex: string, where: string): void {
   const want = [...rgb(hex), 255];
   const worst = Math.max(...got.map((v, i) => Math.abs(v - want[i])));
-  expect(worst, `${where}: got rgba(${got.join(', ')}), expected rgba(${want.join(', ')}), tolerance 2 levels`).toBeLessThanOrEqual(2);
+  expect(
+    worst,
+    `${where}: got rgba(${got.join(', ')}), expected rgba(${want.join(', ')}), tolerance 2 levels`,
+  ).toBeLessThanOrEqual(2);
 }
 
 describe('render3dPng', () => {
@@ -78,14 +88,21 @@ describe('render3dPng', () => {
   });
 
   it('when the background is white and the view is shaded, then the nucleus is white and the lobes keep their hue', async () => {
-    const result = await render3dPng(spec({ view: { azimuthDeg: -90, elevationDeg: 0, lighting: 'soft' } }), { background: 'white' });
+    const result = await render3dPng(
+      spec({ view: { azimuthDeg: -90, elevationDeg: 0, lighting: 'soft' } }),
+      { background: 'white' },
+    );
     const image = await pixels(result.png);
     const [nx, ny] = result.projection.nucleus;
     expect(image.at(nx, ny)).toEqual([255, 255, 255, 255]);
     const above = image.at(nx, ny - 2 * result.projection.pixelsPerBohr);
     const below = image.at(nx, ny + 2 * result.projection.pixelsPerBohr);
-    expect(above[0], `above: rgba(${above.join(', ')}) should be reddest`).toBeGreaterThan(above[1]);
-    expect(below[1], `below: rgba(${below.join(', ')}) should be greener than red`).toBeGreaterThan(below[0]);
+    expect(above[0], `above: rgba(${above.join(', ')}) should be reddest`).toBeGreaterThan(
+      above[1],
+    );
+    expect(below[1], `below: rgba(${below.join(', ')}) should be greener than red`).toBeGreaterThan(
+      below[0],
+    );
   });
 
   it('when axes and a scale bar are asked for, then the projection places them in the picture', async () => {
@@ -102,12 +119,20 @@ describe('render3dPng', () => {
     expect(axes[0].end[0]).toBeGreaterThan(118);
     expect(axes[2].end[1]).toBeLessThan(118);
     expect(scaleBar).not.toBeNull();
-    expect((scaleBar!.to[0] - scaleBar!.from[0]) / result.projection.pixelsPerBohr).toBeCloseTo(scaleBar!.lengthBohr, 9);
+    expect((scaleBar!.to[0] - scaleBar!.from[0]) / result.projection.pixelsPerBohr).toBeCloseTo(
+      scaleBar!.lengthBohr,
+      9,
+    );
   });
 
   it('when figures of different sizes follow each other on the warm page, then each PNG has its own exact size', async () => {
     // round(30 / 25.4 × 300) = 354, round(20 / 25.4 × 300) = 236; then back to 236 × 236.
-    const wide = await render3dPng(spec({ kind: { type: 'cloud', points: 2000, seed: 5 }, print: { widthMm: 30, heightMm: 20, dpi: 300 } }));
+    const wide = await render3dPng(
+      spec({
+        kind: { type: 'cloud', points: 2000, seed: 5 },
+        print: { widthMm: 30, heightMm: 20, dpi: 300 },
+      }),
+    );
     const wideImage = await pixels(wide.png);
     expect([wideImage.width, wideImage.height]).toEqual([354, 236]);
     expect(wide.projection.nucleus[0]).toBeCloseTo(177, 6);
@@ -117,14 +142,18 @@ describe('render3dPng', () => {
   });
 
   it('when a cloud and an angular surface are printed, then the facts say what was drawn and the angular plot has no scale bar', async () => {
-    const cloud = await render3dPng(spec({ kind: { type: 'cloud', points: 5000, seed: 9 }, look: { showScaleBar: true } }));
+    const cloud = await render3dPng(
+      spec({ kind: { type: 'cloud', points: 5000, seed: 9 }, look: { showScaleBar: true } }),
+    );
     expect(cloud.facts.points).toBe(5000);
     // One term: nothing is rejected (shared/sampling/sample-cloud.ts).
     expect(cloud.facts.acceptance).toBe(1);
     expect(cloud.projection.scaleBar).not.toBeNull();
     const cloudImage = await pixels(cloud.png);
     expect(cloudImage.at(2, 2)[3]).toBe(0);
-    const angular = await render3dPng(spec({ kind: { type: 'angular' }, look: { showScaleBar: true } }));
+    const angular = await render3dPng(
+      spec({ kind: { type: 'angular' }, look: { showScaleBar: true } }),
+    );
     expect(angular.projection.scaleBar).toBeNull();
     expect(angular.notes.join(' ')).toMatch(/no scale bar/);
     // Seen along y the p_z polar surface is two touching circles: +phase above, −phase below the nucleus.
@@ -136,7 +165,10 @@ describe('render3dPng', () => {
   });
 
   it('when the same spec is printed twice, then the PNG bytes are identical', async () => {
-    const cloudSpec = spec({ kind: { type: 'cloud', points: 3000, seed: 4 }, look: { showAxes: true, showScaleBar: true } });
+    const cloudSpec = spec({
+      kind: { type: 'cloud', points: 3000, seed: 4 },
+      look: { showAxes: true, showScaleBar: true },
+    });
     const first = await render3dPng(cloudSpec);
     await render3dPng(spec());
     const second = await render3dPng(cloudSpec);
@@ -145,7 +177,10 @@ describe('render3dPng', () => {
 
   it('when the figure would exceed the size limit or is not a 3D kind, then a clear error names the field', async () => {
     const tooLarge = spec({ print: { widthMm: 500, heightMm: 40, dpi: 1200 } });
-    await expect(render3dPng(tooLarge)).rejects.toMatchObject({ code: 'figure_too_large', fields: { 'print.widthMm': expect.stringContaining('23622 px') } });
+    await expect(render3dPng(tooLarge)).rejects.toMatchObject({
+      code: 'figure_too_large',
+      fields: { 'print.widthMm': expect.stringContaining('23622 px') },
+    });
     const slice = spec({ kind: { type: 'slice' } });
     await expect(render3dPng(slice)).rejects.toBeInstanceOf(AppError);
     await expect(render3dPng(slice)).rejects.toMatchObject({ code: 'not_3d' });

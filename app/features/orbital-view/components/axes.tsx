@@ -23,16 +23,36 @@ export function axisEnds(radius: number): [number, number, number][] {
   });
 }
 
-export function Axes({ radius, colour, lineWidthPx, labels }: { radius: number; colour: string; lineWidthPx: number; labels: boolean }) {
+export function Axes({
+  radius,
+  colour,
+  lineWidthPx,
+  labels,
+}: {
+  radius: number;
+  colour: string;
+  lineWidthPx: number;
+  labels: boolean;
+}) {
   const ends = useMemo(() => axisEnds(radius), [radius]);
-  const points = useMemo(() => ends.flatMap((e) => [[-e[0], -e[1], -e[2]] as [number, number, number], e]), [ends]);
+  const points = useMemo(
+    () => ends.flatMap((e) => [[-e[0], -e[1], -e[2]] as [number, number, number], e]),
+    [ends],
+  );
   return (
     <group>
       <Line points={points} segments color={colour} lineWidth={lineWidthPx} />
       {labels
         ? ends.map((end, i) => (
-            <Html key={AXIS_NAMES[i]} position={[end[0] * LABEL_OFFSET, end[1] * LABEL_OFFSET, end[2] * LABEL_OFFSET]} center style={{ pointerEvents: 'none' }}>
-              <span className="font-serif text-base italic text-slate-800 [text-shadow:0_0_3px_white,0_0_3px_white]">{AXIS_NAMES[i]}</span>
+            <Html
+              key={AXIS_NAMES[i]}
+              position={[end[0] * LABEL_OFFSET, end[1] * LABEL_OFFSET, end[2] * LABEL_OFFSET]}
+              center
+              style={{ pointerEvents: 'none' }}
+            >
+              <span className="font-serif text-base italic text-slate-800 [text-shadow:0_0_3px_white,0_0_3px_white]">
+                {AXIS_NAMES[i]}
+              </span>
             </Html>
           ))
         : null}

@@ -15,11 +15,29 @@ export interface CloudPointsProps {
   sizePx: number;
 }
 
-export function CloudPoints({ cloud, isReal, positive, negative, opacity, sizePx }: CloudPointsProps) {
-  const colours = useMemo(() => phaseColours(cloud.phases, positive, negative, isReal), [cloud, positive, negative, isReal]);
+export function CloudPoints({
+  cloud,
+  isReal,
+  positive,
+  negative,
+  opacity,
+  sizePx,
+}: CloudPointsProps) {
+  const colours = useMemo(
+    () => phaseColours(cloud.phases, positive, negative, isReal),
+    [cloud, positive, negative, isReal],
+  );
   const geometry = usePointGeometry(cloud.positions, colours);
   const material = useMemo(
-    () => new PointsMaterial({ size: sizePx, sizeAttenuation: false, vertexColors: true, transparent: opacity < 1, opacity, depthWrite: opacity >= 1 }),
+    () =>
+      new PointsMaterial({
+        size: sizePx,
+        sizeAttenuation: false,
+        vertexColors: true,
+        transparent: opacity < 1,
+        opacity,
+        depthWrite: opacity >= 1,
+      }),
     [sizePx, opacity],
   );
   useEffect(() => () => material.dispose(), [material]);

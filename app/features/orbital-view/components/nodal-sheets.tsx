@@ -10,7 +10,14 @@ const SHEET_OPACITY = 0.2;
 export function NodalSheets({ mesh }: { mesh: MeshArrays | null }) {
   const geometry = useMeshGeometry(mesh);
   const material = useMemo(
-    () => new MeshBasicMaterial({ color: SHEET_COLOUR, transparent: true, opacity: SHEET_OPACITY, side: DoubleSide, depthWrite: false }),
+    () =>
+      new MeshBasicMaterial({
+        color: SHEET_COLOUR,
+        transparent: true,
+        opacity: SHEET_OPACITY,
+        side: DoubleSide,
+        depthWrite: false,
+      }),
     [],
   );
   useEffect(() => () => material.dispose(), [material]);

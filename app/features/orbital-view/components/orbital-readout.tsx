@@ -12,7 +12,19 @@ function Row({ term, children }: { term: string; children: React.ReactNode }) {
 }
 
 const pct = (f: number): string => `${(100 * f).toFixed(2)} %`;
-const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+const SUPERSCRIPT: Record<string, string> = {
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
+};
 /** 4 significant digits, as a × 10ⁿ below 0.01. */
 function number(value: number): string {
   if (value === 0 || Math.abs(value) >= 0.01) return value.toPrecision(4);
@@ -20,7 +32,13 @@ function number(value: number): string {
   return `${mantissa} × 10${String(Number(exponent)).replace(/./g, (c) => SUPERSCRIPT[c] ?? c)}`;
 }
 
-export function OrbitalReadout({ facts, notes }: { facts: OrbitalFacts; notes: readonly string[] }) {
+export function OrbitalReadout({
+  facts,
+  notes,
+}: {
+  facts: OrbitalFacts;
+  notes: readonly string[];
+}) {
   return (
     <section aria-label="Figure read-out" className="text-xs">
       <dl className="space-y-0.5">
@@ -30,8 +48,12 @@ export function OrbitalReadout({ facts, notes }: { facts: OrbitalFacts; notes: r
             {pct(facts.enclosed.requested)} / {pct(facts.enclosed.achieved)}
           </Row>
         ) : null}
-        {facts.densityLevel !== null ? <Row term="Level |ψ|²">{number(facts.densityLevel)} bohr⁻³</Row> : null}
-        {facts.psiLevel !== null ? <Row term="Level |ψ|">{number(facts.psiLevel)} bohr⁻³ᐟ²</Row> : null}
+        {facts.densityLevel !== null ? (
+          <Row term="Level |ψ|²">{number(facts.densityLevel)} bohr⁻³</Row>
+        ) : null}
+        {facts.psiLevel !== null ? (
+          <Row term="Level |ψ|">{number(facts.psiLevel)} bohr⁻³ᐟ²</Row>
+        ) : null}
         {facts.outer ? (
           <Row term="Outer surface">
             {pct(facts.outer.requested)} / {pct(facts.outer.achieved)}
@@ -42,8 +64,12 @@ export function OrbitalReadout({ facts, notes }: { facts: OrbitalFacts; notes: r
             {facts.grid.pointsPerAxis}³, ±{facts.grid.halfWidthBohr} bohr
           </Row>
         ) : null}
-        {facts.triangles.total > 0 ? <Row term="Triangles">{facts.triangles.total.toLocaleString('en-GB')}</Row> : null}
-        {facts.points !== null ? <Row term="Points">{facts.points.toLocaleString('en-GB')}</Row> : null}
+        {facts.triangles.total > 0 ? (
+          <Row term="Triangles">{facts.triangles.total.toLocaleString('en-GB')}</Row>
+        ) : null}
+        {facts.points !== null ? (
+          <Row term="Points">{facts.points.toLocaleString('en-GB')}</Row>
+        ) : null}
         {facts.nodes ? (
           <Row term="Nodes (radial / angular)">
             {facts.nodes.radial} / {facts.nodes.angular}

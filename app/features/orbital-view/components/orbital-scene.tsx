@@ -25,12 +25,25 @@ export interface OrbitalSceneProps {
   onScaleBar?: (layout: ScaleBarLayout) => void;
 }
 
-export function OrbitalScene({ geometry, spec, domLabels, lineWidthPx, pointSizePx, onScaleBar }: OrbitalSceneProps) {
+export function OrbitalScene({
+  geometry,
+  spec,
+  domLabels,
+  lineWidthPx,
+  pointSizePx,
+  onScaleBar,
+}: OrbitalSceneProps) {
   const { look, view } = spec;
   // One object per colour pair: the phase-coloured meshes rebuild their vertex colours when it changes.
-  const colours = useMemo(() => ({ positive: look.positiveColour, negative: look.negativeColour }), [look.positiveColour, look.negativeColour]);
+  const colours = useMemo(
+    () => ({ positive: look.positiveColour, negative: look.negativeColour }),
+    [look.positiveColour, look.negativeColour],
+  );
   const lighting = view.lighting;
-  const outerOpacity = spec.kind.type === 'isosurface' && spec.kind.outerSurface ? spec.kind.outerSurface.opacity : 0.3;
+  const outerOpacity =
+    spec.kind.type === 'isosurface' && spec.kind.outerSurface
+      ? spec.kind.outerSurface.opacity
+      : 0.3;
   const surfaces = geometry.surfaces;
   const outer = geometry.outer;
   return (
@@ -38,21 +51,62 @@ export function OrbitalScene({ geometry, spec, domLabels, lineWidthPx, pointSize
       <SceneCamera view={view} radius={geometry.radius}>
         <SceneLighting preset={lighting} />
         {look.showScaleBar && geometry.hasLength ? (
-          <ScaleBar unit={spec.system.lengthUnit} colour={GUIDE_COLOUR} lineWidthPx={lineWidthPx} domLabel={domLabels} onLayout={onScaleBar} />
+          <ScaleBar
+            unit={spec.system.lengthUnit}
+            colour={GUIDE_COLOUR}
+            lineWidthPx={lineWidthPx}
+            domLabel={domLabels}
+            onLayout={onScaleBar}
+          />
         ) : null}
       </SceneCamera>
       {surfaces ? (
         <>
-          <SurfaceMesh mesh={surfaces.positive} colour={colours.positive} opacity={look.opacity} lighting={lighting} />
-          <SurfaceMesh mesh={surfaces.negative} colour={colours.negative} opacity={look.opacity} lighting={lighting} />
-          <SurfaceMesh mesh={surfaces.phase} colour={colours.positive} phaseColour={colours} opacity={look.opacity} lighting={lighting} />
+          <SurfaceMesh
+            mesh={surfaces.positive}
+            colour={colours.positive}
+            opacity={look.opacity}
+            lighting={lighting}
+          />
+          <SurfaceMesh
+            mesh={surfaces.negative}
+            colour={colours.negative}
+            opacity={look.opacity}
+            lighting={lighting}
+          />
+          <SurfaceMesh
+            mesh={surfaces.phase}
+            colour={colours.positive}
+            phaseColour={colours}
+            opacity={look.opacity}
+            lighting={lighting}
+          />
         </>
       ) : null}
       {outer ? (
         <>
-          <SurfaceMesh mesh={outer.positive} colour={colours.positive} opacity={outerOpacity} lighting={lighting} translucentLayer />
-          <SurfaceMesh mesh={outer.negative} colour={colours.negative} opacity={outerOpacity} lighting={lighting} translucentLayer />
-          <SurfaceMesh mesh={outer.phase} colour={colours.positive} phaseColour={colours} opacity={outerOpacity} lighting={lighting} translucentLayer />
+          <SurfaceMesh
+            mesh={outer.positive}
+            colour={colours.positive}
+            opacity={outerOpacity}
+            lighting={lighting}
+            translucentLayer
+          />
+          <SurfaceMesh
+            mesh={outer.negative}
+            colour={colours.negative}
+            opacity={outerOpacity}
+            lighting={lighting}
+            translucentLayer
+          />
+          <SurfaceMesh
+            mesh={outer.phase}
+            colour={colours.positive}
+            phaseColour={colours}
+            opacity={outerOpacity}
+            lighting={lighting}
+            translucentLayer
+          />
         </>
       ) : null}
       {geometry.cloud ? (
@@ -66,7 +120,14 @@ export function OrbitalScene({ geometry, spec, domLabels, lineWidthPx, pointSize
         />
       ) : null}
       {look.showNodalSurfaces ? <NodalSheets mesh={geometry.nodalSheets} /> : null}
-      {look.showAxes ? <Axes radius={geometry.radius} colour={GUIDE_COLOUR} lineWidthPx={lineWidthPx} labels={domLabels} /> : null}
+      {look.showAxes ? (
+        <Axes
+          radius={geometry.radius}
+          colour={GUIDE_COLOUR}
+          lineWidthPx={lineWidthPx}
+          labels={domLabels}
+        />
+      ) : null}
     </>
   );
 }

@@ -47,7 +47,15 @@ function viewAfterKey(view: ViewSettings, key: string): ViewSettings | null {
   }
 }
 
-function ViewControls({ view, radius, onEnd }: { view: ViewSettings; radius: number; onEnd: (v: ViewSettings) => void }) {
+function ViewControls({
+  view,
+  radius,
+  onEnd,
+}: {
+  view: ViewSettings;
+  radius: number;
+  onEnd: (v: ViewSettings) => void;
+}) {
   const size = useThree((s) => s.size);
   const camera = useThree((s) => s.camera);
   return (
@@ -55,7 +63,9 @@ function ViewControls({ view, radius, onEnd }: { view: ViewSettings; radius: num
       makeDefault
       enablePan={false}
       enableDamping={false}
-      onEnd={() => onEnd(viewFromCamera(camera.position, camera.zoom, view, radius, size.width, size.height))}
+      onEnd={() =>
+        onEnd(viewFromCamera(camera.position, camera.zoom, view, radius, size.width, size.height))
+      }
     />
   );
 }
@@ -74,7 +84,10 @@ export function OrbitalViewport({ spec, onViewChange, className }: OrbitalViewpo
     },
     [specViewKey, onViewChange],
   );
-  const choosePreset = useCallback((name: ViewPresetName) => changeView(presetView(name, view)), [changeView, view]);
+  const choosePreset = useCallback(
+    (name: ViewPresetName) => changeView(presetView(name, view)),
+    [changeView, view],
+  );
   // A preset must re-pose the camera even if the numbers equal the last ones, so the scene keys on this object.
   const sceneSpec = useMemo(() => ({ ...spec, view }), [spec, view]);
   const notes = useMemo(() => {
@@ -108,18 +121,37 @@ export function OrbitalViewport({ spec, onViewChange, className }: OrbitalViewpo
         >
           {geometry ? (
             <>
-              <OrbitalScene geometry={geometry} spec={sceneSpec} domLabels lineWidthPx={VIEWPORT_LINE_PX} pointSizePx={VIEWPORT_POINT_PX} />
+              <OrbitalScene
+                geometry={geometry}
+                spec={sceneSpec}
+                domLabels
+                lineWidthPx={VIEWPORT_LINE_PX}
+                pointSizePx={VIEWPORT_POINT_PX}
+              />
               <ViewControls view={view} radius={geometry.radius} onEnd={changeView} />
             </>
           ) : null}
         </Canvas>
         {status === 'working' ? (
-          <div role="progressbar" aria-label={`Computing: ${stage}`} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(100 * progress)} className="absolute inset-x-0 top-0 h-1 bg-slate-100">
-            <div className="h-1 bg-slate-600 transition-[width]" style={{ width: `${Math.round(100 * progress)}%` }} />
+          <div
+            role="progressbar"
+            aria-label={`Computing: ${stage}`}
+            aria-valuemin={0}
+            aria-valuemax={100}
+            aria-valuenow={Math.round(100 * progress)}
+            className="absolute inset-x-0 top-0 h-1 bg-slate-100"
+          >
+            <div
+              className="h-1 bg-slate-600 transition-[width]"
+              style={{ width: `${Math.round(100 * progress)}%` }}
+            />
           </div>
         ) : null}
         {status === 'error' ? (
-          <p role="alert" className="absolute inset-x-2 bottom-2 rounded bg-red-50 p-2 text-sm text-red-800">
+          <p
+            role="alert"
+            className="absolute inset-x-2 bottom-2 rounded bg-red-50 p-2 text-sm text-red-800"
+          >
             {error}
           </p>
         ) : null}

@@ -17,7 +17,10 @@ export interface ScaleBarProps {
 }
 
 /** Pixels per bohr at the nucleus for the current camera. */
-export function pixelsPerBohrAtNucleus(camera: OrthographicCamera | PerspectiveCamera, heightPx: number): number {
+export function pixelsPerBohrAtNucleus(
+  camera: OrthographicCamera | PerspectiveCamera,
+  heightPx: number,
+): number {
   if (camera instanceof OrthographicCamera) return camera.zoom;
   const depth = camera.position.length();
   return heightPx / (2 * depth * Math.tan((camera.fov * Math.PI) / 360));
@@ -43,14 +46,22 @@ export function ScaleBar({ unit, colour, lineWidthPx, domLabel, onLayout }: Scal
     const { width, height } = state.size;
     const scale = pixelsPerBohrAtNucleus(camera, height);
     const seen = last.current;
-    if (!group.current || (scale === seen.scale && width === seen.width && height === seen.height)) return;
+    if (!group.current || (scale === seen.scale && width === seen.width && height === seen.height))
+      return;
     seen.scale = scale;
     seen.width = width;
     seen.height = height;
     const layout = scaleBarLayout(scale, width, height, unit);
-    const depth = camera instanceof OrthographicCamera ? (camera.near + camera.far) / 2 : camera.position.length();
+    const depth =
+      camera instanceof OrthographicCamera
+        ? (camera.near + camera.far) / 2
+        : camera.position.length();
     // Camera space: x right, y up, looking down −z; 1 pixel = 1/scale bohr at the nucleus's depth.
-    group.current.position.set((layout.from[0] - width / 2) / scale, (height / 2 - layout.from[1]) / scale, -depth);
+    group.current.position.set(
+      (layout.from[0] - width / 2) / scale,
+      (height / 2 - layout.from[1]) / scale,
+      -depth,
+    );
     group.current.scale.set(layout.lengthBohr, TICK_PX / scale, 1);
     if (layout.label !== label) setLabel(layout.label);
     onLayout?.(layout);
@@ -58,10 +69,19 @@ export function ScaleBar({ unit, colour, lineWidthPx, domLabel, onLayout }: Scal
 
   return (
     <group ref={group} renderOrder={10}>
-      <Line points={BAR_POINTS} segments color={colour} lineWidth={lineWidthPx} depthTest={false} renderOrder={10} />
+      <Line
+        points={BAR_POINTS}
+        segments
+        color={colour}
+        lineWidth={lineWidthPx}
+        depthTest={false}
+        renderOrder={10}
+      />
       {domLabel && label ? (
         <Html position={[0.5, 3, 0]} center style={{ pointerEvents: 'none' }}>
-          <span className="whitespace-nowrap text-xs text-slate-800 [text-shadow:0_0_3px_white,0_0_3px_white]">{label}</span>
+          <span className="whitespace-nowrap text-xs text-slate-800 [text-shadow:0_0_3px_white,0_0_3px_white]">
+            {label}
+          </span>
         </Html>
       ) : null}
     </group>

@@ -12,7 +12,10 @@ export interface SceneCameraProps {
   children?: ReactNode;
 }
 
-type Controls = { target?: { set(x: number, y: number, z: number): void }; update?: () => void } | null;
+type Controls = {
+  target?: { set(x: number, y: number, z: number): void };
+  update?: () => void;
+} | null;
 
 export function SceneCamera({ view, radius, children }: SceneCameraProps) {
   const set = useThree((s) => s.set);
@@ -57,7 +60,11 @@ export function SceneCamera({ view, radius, children }: SceneCameraProps) {
   }, [view, radius, size.width, size.height, controls, invalidate]);
 
   return view.projection === 'perspective' ? (
-    <perspectiveCamera key="perspective" ref={cameraRef as React.Ref<PerspectiveCamera>} fov={PERSPECTIVE_FOV}>
+    <perspectiveCamera
+      key="perspective"
+      ref={cameraRef as React.Ref<PerspectiveCamera>}
+      fov={PERSPECTIVE_FOV}
+    >
       {children}
     </perspectiveCamera>
   ) : (

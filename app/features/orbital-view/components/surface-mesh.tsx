@@ -18,9 +18,19 @@ export interface SurfaceMeshProps {
   translucentLayer?: boolean;
 }
 
-export function SurfaceMesh({ mesh, colour, phaseColour, opacity, lighting, translucentLayer = false }: SurfaceMeshProps) {
+export function SurfaceMesh({
+  mesh,
+  colour,
+  phaseColour,
+  opacity,
+  lighting,
+  translucentLayer = false,
+}: SurfaceMeshProps) {
   const colours = useMemo(
-    () => (mesh?.phases && phaseColour ? phaseColours(mesh.phases, phaseColour.positive, phaseColour.negative, false) : null),
+    () =>
+      mesh?.phases && phaseColour
+        ? phaseColours(mesh.phases, phaseColour.positive, phaseColour.negative, false)
+        : null,
     [mesh, phaseColour],
   );
   const geometry = useMeshGeometry(mesh, colours);
@@ -35,7 +45,11 @@ export function SurfaceMesh({ mesh, colour, phaseColour, opacity, lighting, tran
       side: translucent ? DoubleSide : FrontSide,
     };
     if (lighting === 'flat') return new MeshBasicMaterial(common);
-    return new MeshPhongMaterial({ ...common, shininess: lighting === 'bright' ? 60 : 28, specular: lighting === 'bright' ? '#555555' : '#2a2a2a' });
+    return new MeshPhongMaterial({
+      ...common,
+      shininess: lighting === 'bright' ? 60 : 28,
+      specular: lighting === 'bright' ? '#555555' : '#2a2a2a',
+    });
   }, [colour, colours, opacity, lighting, translucent, translucentLayer]);
   useEffect(() => () => material.dispose(), [material]);
   if (!geometry) return null;

@@ -5,11 +5,19 @@ import { createRoot } from 'react-dom/client';
 import '../../../styles.css';
 import { figureSpecSchema, type FigureSpecInput } from '../../../../shared/spec/figure-spec';
 import { defaultHouseStyle } from '../../../../shared/spec/house-style';
-import { resolveFigureSpec, type ResolvedFigureSpec } from '../../../../shared/spec/resolve-figure-spec';
+import {
+  resolveFigureSpec,
+  type ResolvedFigureSpec,
+} from '../../../../shared/spec/resolve-figure-spec';
 import { OrbitalViewport } from '../components/orbital-viewport';
 
 const examples: Record<string, FigureSpecInput> = {
-  '2p_z isosurface': { schemaVersion: 1, state: { terms: [{ n: 2, l: 1, m: 0 }] }, kind: { type: 'isosurface' }, look: { showNodalSurfaces: true } },
+  '2p_z isosurface': {
+    schemaVersion: 1,
+    state: { terms: [{ n: 2, l: 1, m: 0 }] },
+    kind: { type: 'isosurface' },
+    look: { showNodalSurfaces: true },
+  },
   '3d_z² with outer surface': {
     schemaVersion: 1,
     state: { terms: [{ n: 3, l: 2, m: 0 }] },
@@ -18,16 +26,37 @@ const examples: Record<string, FigureSpecInput> = {
   },
   'sp³ hybrid': {
     schemaVersion: 1,
-    state: { terms: [{ n: 2, l: 0, m: 0 }, { n: 2, l: 1, m: 1 }, { n: 2, l: 1, m: -1 }, { n: 2, l: 1, m: 0 }] },
+    state: {
+      terms: [
+        { n: 2, l: 0, m: 0 },
+        { n: 2, l: 1, m: 1 },
+        { n: 2, l: 1, m: -1 },
+        { n: 2, l: 1, m: 0 },
+      ],
+    },
     kind: { type: 'isosurface' },
     system: { lengthUnit: 'pm' },
   },
-  '3p_z cloud': { schemaVersion: 1, state: { terms: [{ n: 3, l: 1, m: 0 }] }, kind: { type: 'cloud', points: 60000 } },
-  '4f angular': { schemaVersion: 1, state: { terms: [{ n: 4, l: 3, m: -2 }] }, kind: { type: 'angular' }, look: { showNodalSurfaces: true } },
-  'complex 2p, m = +1': { schemaVersion: 1, state: { terms: [{ n: 2, l: 1, m: 1, basis: 'complex' }] }, kind: { type: 'isosurface' } },
+  '3p_z cloud': {
+    schemaVersion: 1,
+    state: { terms: [{ n: 3, l: 1, m: 0 }] },
+    kind: { type: 'cloud', points: 60000 },
+  },
+  '4f angular': {
+    schemaVersion: 1,
+    state: { terms: [{ n: 4, l: 3, m: -2 }] },
+    kind: { type: 'angular' },
+    look: { showNodalSurfaces: true },
+  },
+  'complex 2p, m = +1': {
+    schemaVersion: 1,
+    state: { terms: [{ n: 2, l: 1, m: 1, basis: 'complex' }] },
+    kind: { type: 'isosurface' },
+  },
 };
 
-const resolve = (input: FigureSpecInput): ResolvedFigureSpec => resolveFigureSpec(figureSpecSchema.parse(input), defaultHouseStyle);
+const resolve = (input: FigureSpecInput): ResolvedFigureSpec =>
+  resolveFigureSpec(figureSpecSchema.parse(input), defaultHouseStyle);
 
 function Harness() {
   const names = Object.keys(examples);

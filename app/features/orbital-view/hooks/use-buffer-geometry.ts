@@ -3,7 +3,10 @@ import { useEffect, useMemo } from 'react';
 import { BufferAttribute, BufferGeometry } from 'three';
 import type { MeshArrays } from '../utils/mesh-arrays';
 
-export function useMeshGeometry(mesh: MeshArrays | null, colours: Float32Array | null = null): BufferGeometry | null {
+export function useMeshGeometry(
+  mesh: MeshArrays | null,
+  colours: Float32Array | null = null,
+): BufferGeometry | null {
   const geometry = useMemo(() => {
     if (!mesh) return null;
     const g = new BufferGeometry();
@@ -18,7 +21,10 @@ export function useMeshGeometry(mesh: MeshArrays | null, colours: Float32Array |
   return geometry;
 }
 
-export function usePointGeometry(positions: Float32Array | null, colours: Float32Array | null): BufferGeometry | null {
+export function usePointGeometry(
+  positions: Float32Array | null,
+  colours: Float32Array | null,
+): BufferGeometry | null {
   const geometry = useMemo(() => {
     if (!positions) return null;
     const g = new BufferGeometry();

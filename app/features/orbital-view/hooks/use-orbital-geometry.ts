@@ -1,7 +1,12 @@
 // The 3D figure's geometry for a spec, computed in the worker: status, progress, result, facts and notes.
 import { useEffect, useState } from 'react';
 import type { ResolvedFigureSpec } from '../../../../shared/spec/resolve-figure-spec';
-import { cachedGeometry, geometryKey, GeometryCancelledError, requestGeometry } from '../worker/geometry-client';
+import {
+  cachedGeometry,
+  geometryKey,
+  GeometryCancelledError,
+  requestGeometry,
+} from '../worker/geometry-client';
 import type { OrbitalFacts, OrbitalGeometry } from '../utils/orbital-geometry';
 
 export type GeometryStatus = 'idle' | 'working' | 'ready' | 'error';
@@ -43,7 +48,8 @@ export function useOrbitalGeometry(spec: ResolvedFigureSpec | null): OrbitalGeom
         setRequest({ key, progress: 1, stage: 'done', error: null });
       },
       (error: Error) => {
-        if (live && !(error instanceof GeometryCancelledError)) setRequest({ key, progress: 0, stage: '', error: error.message });
+        if (live && !(error instanceof GeometryCancelledError))
+          setRequest({ key, progress: 0, stage: '', error: error.message });
       },
     );
     return () => {
@@ -53,11 +59,38 @@ export function useOrbitalGeometry(spec: ResolvedFigureSpec | null): OrbitalGeom
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [key]);
 
-  if (!spec) return { status: 'idle', progress: 0, stage: '', geometry: null, facts: null, notes: [], error: null };
-  if (hit) return { status: 'ready', progress: 1, stage: 'done', geometry: hit, facts: hit.facts, notes: hit.notes, error: null };
+  if (!spec)
+    return {
+      status: 'idle',
+      progress: 0,
+      stage: '',
+      geometry: null,
+      facts: null,
+      notes: [],
+      error: null,
+    };
+  if (hit)
+    return {
+      status: 'ready',
+      progress: 1,
+      stage: 'done',
+      geometry: hit,
+      facts: hit.facts,
+      notes: hit.notes,
+      error: null,
+    };
   const current = request?.key === key ? request : null;
   const shown = lastReady;
-  if (current?.error) return { status: 'error', progress: 0, stage: '', geometry: null, facts: null, notes: [], error: current.error };
+  if (current?.error)
+    return {
+      status: 'error',
+      progress: 0,
+      stage: '',
+      geometry: null,
+      facts: null,
+      notes: [],
+      error: current.error,
+    };
   return {
     status: 'working',
     progress: current?.progress ?? 0,

@@ -36,22 +36,36 @@ export interface CameraPose {
 
 const radians = (degrees: number): number => (degrees * Math.PI) / 180;
 
-export function cameraPose(view: ViewSettings, radius: number, widthPx: number, heightPx: number): CameraPose {
+export function cameraPose(
+  view: ViewSettings,
+  radius: number,
+  widthPx: number,
+  heightPx: number,
+): CameraPose {
   const az = radians(view.azimuthDeg);
   const el = radians(view.elevationDeg);
   const fitted = Math.max(radius, 1e-6) * FRAME_MARGIN;
   const shorter = Math.min(widthPx, heightPx);
   const halfFov = radians(PERSPECTIVE_FOV / 2);
-  const perspectiveDistance = fitted / (Math.tan(halfFov) * Math.min(1, widthPx / heightPx)) / view.zoom;
+  const perspectiveDistance =
+    fitted / (Math.tan(halfFov) * Math.min(1, widthPx / heightPx)) / view.zoom;
   const distance = view.projection === 'perspective' ? perspectiveDistance : 4 * fitted;
-  const direction = { x: Math.cos(el) * Math.cos(az), y: Math.cos(el) * Math.sin(az), z: Math.sin(el) };
+  const direction = {
+    x: Math.cos(el) * Math.cos(az),
+    y: Math.cos(el) * Math.sin(az),
+    z: Math.sin(el),
+  };
   let upPhysics: Vec3 = { x: 0, y: 0, z: 1 };
   if (Math.abs(Math.abs(view.elevationDeg) - 90) < POLE_DEGREES) {
     const s = view.elevationDeg > 0 ? -1 : 1;
     upPhysics = { x: s * Math.cos(az), y: s * Math.sin(az), z: 0 };
   }
   return {
-    position: physicsToThree(direction.x * distance, direction.y * distance, direction.z * distance),
+    position: physicsToThree(
+      direction.x * distance,
+      direction.y * distance,
+      direction.z * distance,
+    ),
     up: physicsToThree(upPhysics.x, upPhysics.y, upPhysics.z),
     pixelsPerBohr: (shorter / 2 / fitted) * view.zoom,
     distance,
@@ -72,10 +86,21 @@ export function viewFromCamera(
   const p = threeToPhysics(position.x, position.y, position.z);
   const length = Math.hypot(p.x, p.y, p.z);
   const azimuthDeg = round((Math.atan2(p.y, p.x) * 180) / Math.PI, 2);
-  const elevationDeg = round((Math.asin(Math.max(-1, Math.min(1, p.z / length))) * 180) / Math.PI, 2);
+  const elevationDeg = round(
+    (Math.asin(Math.max(-1, Math.min(1, p.z / length))) * 180) / Math.PI,
+    2,
+  );
   const atZoomOne = cameraPose({ ...base, zoom: 1 }, radius, widthPx, heightPx);
-  const relative = base.projection === 'perspective' ? atZoomOne.distance / length : zoom / atZoomOne.pixelsPerBohr;
-  return { ...base, azimuthDeg, elevationDeg, zoom: round(Math.min(10, Math.max(0.1, relative)), 3) };
+  const relative =
+    base.projection === 'perspective'
+      ? atZoomOne.distance / length
+      : zoom / atZoomOne.pixelsPerBohr;
+  return {
+    ...base,
+    azimuthDeg,
+    elevationDeg,
+    zoom: round(Math.min(10, Math.max(0.1, relative)), 3),
+  };
 }
 
 function round(value: number, digits: number): number {

@@ -9,7 +9,12 @@ import { Color } from 'three';
 const hsl = { h: 0, s: 0, l: 0 };
 
 /** RGB per item (linear, as three.js vertex colours expect) from arg ψ per item. */
-export function phaseColours(phases: Float32Array, positive: string, negative: string, isReal: boolean): Float32Array {
+export function phaseColours(
+  phases: Float32Array,
+  positive: string,
+  negative: string,
+  isReal: boolean,
+): Float32Array {
   const out = new Float32Array(3 * phases.length);
   const plus = new Color(positive);
   const minus = new Color(negative);

@@ -12,11 +12,19 @@ export interface PrintProjection {
   /** Pixels per bohr at the nucleus. */
   readonly pixelsPerBohr: number;
   readonly nucleus: readonly [number, number];
-  readonly axes: readonly { readonly name: 'x' | 'y' | 'z'; readonly end: readonly [number, number] }[];
+  readonly axes: readonly {
+    readonly name: 'x' | 'y' | 'z';
+    readonly end: readonly [number, number];
+  }[];
   readonly scaleBar: ScaleBarLayout | null;
 }
 
-export function projectToPixels(camera: Camera, point: readonly [number, number, number], widthPx: number, heightPx: number): [number, number] {
+export function projectToPixels(
+  camera: Camera,
+  point: readonly [number, number, number],
+  widthPx: number,
+  heightPx: number,
+): [number, number] {
   const v = new Vector3(point[0], point[1], point[2]).project(camera);
   return [((v.x + 1) / 2) * widthPx, ((1 - v.y) / 2) * heightPx];
 }

@@ -18,14 +18,23 @@ export interface ScaleBarLayout {
   readonly to: readonly [number, number];
 }
 
-const UNIT_PER_BOHR: Record<LengthUnit, number> = { bohr: 1, pm: PM_PER_BOHR, angstrom: ANGSTROM_PER_BOHR };
+const UNIT_PER_BOHR: Record<LengthUnit, number> = {
+  bohr: 1,
+  pm: PM_PER_BOHR,
+  angstrom: ANGSTROM_PER_BOHR,
+};
 const UNIT_SYMBOL: Record<LengthUnit, string> = { bohr: 'bohr', pm: 'pm', angstrom: 'Å' };
 /** Target bar length as a fraction of the picture's width. */
 const TARGET_FRACTION = 0.2;
 /** Distance of the bar from the left and bottom edges, fraction of the shorter side. */
 const INSET = 0.07;
 
-export function scaleBarLayout(pixelsPerBohr: number, widthPx: number, heightPx: number, unit: LengthUnit): ScaleBarLayout {
+export function scaleBarLayout(
+  pixelsPerBohr: number,
+  widthPx: number,
+  heightPx: number,
+  unit: LengthUnit,
+): ScaleBarLayout {
   const pixelsPerUnit = pixelsPerBohr / UNIT_PER_BOHR[unit];
   const target = (TARGET_FRACTION * widthPx) / pixelsPerUnit;
   const decade = 10 ** Math.floor(Math.log10(target));

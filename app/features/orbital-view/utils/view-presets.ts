@@ -3,7 +3,10 @@ import type { ViewSettings } from './camera-pose';
 
 export type ViewPresetName = 'along-x' | 'along-y' | 'along-z' | 'three-quarter';
 
-export const VIEW_PRESETS: Record<ViewPresetName, { label: string; azimuthDeg: number; elevationDeg: number }> = {
+export const VIEW_PRESETS: Record<
+  ViewPresetName,
+  { label: string; azimuthDeg: number; elevationDeg: number }
+> = {
   'along-x': { label: 'Along x', azimuthDeg: 0, elevationDeg: 0 },
   'along-y': { label: 'Along y', azimuthDeg: -90, elevationDeg: 0 },
   'along-z': { label: 'Along z', azimuthDeg: -90, elevationDeg: 90 },

@@ -18,7 +18,12 @@ export class GeometryCancelledError extends Error {
 
 /** The part of a spec the geometry depends on; view, colours and print settings are left out. */
 export function geometryKey(spec: GeometrySpec): string {
-  return canonicalJson({ system: spec.system, state: spec.state, kind: spec.kind, nodal: spec.look.showNodalSurfaces });
+  return canonicalJson({
+    system: spec.system,
+    state: spec.state,
+    kind: spec.kind,
+    nodal: spec.look.showNodalSurfaces,
+  });
 }
 
 interface Pending {
@@ -72,7 +77,10 @@ export function cachedGeometry(spec: GeometrySpec): OrbitalGeometry | null {
   return cache.get(geometryKey(spec)) ?? null;
 }
 
-export function requestGeometry(spec: GeometrySpec, onProgress: (fraction: number, stage: string) => void): Promise<OrbitalGeometry> {
+export function requestGeometry(
+  spec: GeometrySpec,
+  onProgress: (fraction: number, stage: string) => void,
+): Promise<OrbitalGeometry> {
   const key = geometryKey(spec);
   const hit = cache.get(key);
   if (hit) {
@@ -99,7 +107,10 @@ export function requestGeometry(spec: GeometrySpec, onProgress: (fraction: numbe
     reject = no;
   });
   pending = { id, key, promise, resolve, reject, listeners: new Set([onProgress]) };
-  const request: GeometryRequest = { id, spec: { system: spec.system, state: spec.state, kind: spec.kind, look: spec.look } };
+  const request: GeometryRequest = {
+    id,
+    spec: { system: spec.system, state: spec.state, kind: spec.kind, look: spec.look },
+  };
   worker.postMessage(request);
   return promise;
 }

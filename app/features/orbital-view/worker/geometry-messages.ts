@@ -8,6 +8,11 @@ export interface GeometryRequest {
 }
 
 export type GeometryReply =
-  | { readonly id: number; readonly type: 'progress'; readonly fraction: number; readonly stage: string }
+  | {
+      readonly id: number;
+      readonly type: 'progress';
+      readonly fraction: number;
+      readonly stage: string;
+    }
   | { readonly id: number; readonly type: 'done'; readonly geometry: OrbitalGeometry }
   | { readonly id: number; readonly type: 'error'; readonly message: string };

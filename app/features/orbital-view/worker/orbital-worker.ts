@@ -6,7 +6,8 @@ import type { OrbitalGeometry, SurfaceSet } from '../utils/orbital-geometry';
 import type { GeometryReply, GeometryRequest } from './geometry-messages';
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
-const reply = (message: GeometryReply, transfer: Transferable[] = []): void => scope.postMessage(message, transfer);
+const reply = (message: GeometryReply, transfer: Transferable[] = []): void =>
+  scope.postMessage(message, transfer);
 
 /** Progress messages at most this often (ms): enough for a progress bar, few enough not to flood the channel. */
 const PROGRESS_INTERVAL = 60;
@@ -30,12 +31,17 @@ scope.onmessage = (event: MessageEvent<GeometryRequest>) => {
 function transferList(geometry: OrbitalGeometry): Transferable[] {
   const list: ArrayBuffer[] = [];
   const addSet = (set: SurfaceSet | null): void => {
-    for (const mesh of [set?.positive, set?.negative, set?.phase]) if (mesh) list.push(...meshBuffers(mesh));
+    for (const mesh of [set?.positive, set?.negative, set?.phase])
+      if (mesh) list.push(...meshBuffers(mesh));
   };
   addSet(geometry.surfaces);
   addSet(geometry.outer);
   if (geometry.nodalSheets) list.push(...meshBuffers(geometry.nodalSheets));
-  if (geometry.cloud) list.push(geometry.cloud.positions.buffer as ArrayBuffer, geometry.cloud.phases.buffer as ArrayBuffer);
+  if (geometry.cloud)
+    list.push(
+      geometry.cloud.positions.buffer as ArrayBuffer,
+      geometry.cloud.phases.buffer as ArrayBuffer,
+    );
   // A buffer may appear once only in a transfer list.
   return [...new Set(list)];
 }
