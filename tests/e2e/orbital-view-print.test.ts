@@ -175,6 +175,19 @@ describe('render3dPng', () => {
     expect(first.png.equals(second.png)).toBe(true);
   });
 
+  it('when the spec is invalid inside, then the error names the field and the next figure still renders', async () => {
+    const bad = {
+      ...spec(),
+      state: { terms: [{ n: 2, l: 2, m: 0, basis: 'real', weight: { re: 1, im: 0 } }], time: 0 },
+    };
+    await expect(render3dPng(bad as ResolvedFigureSpec)).rejects.toMatchObject({
+      code: 'render_failed',
+      message: expect.stringContaining('spec.state.terms.0.l: l must be less than n (2)'),
+    });
+    const next = await render3dPng(spec());
+    expect([next.widthPx, next.heightPx]).toEqual([236, 236]);
+  });
+
   it('when the figure would exceed the size limit or is not a 3D kind, then a clear error names the field', async () => {
     const tooLarge = spec({ print: { widthMm: 500, heightMm: 40, dpi: 1200 } });
     await expect(render3dPng(tooLarge)).rejects.toMatchObject({
