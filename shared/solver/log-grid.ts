@@ -16,7 +16,7 @@ export interface LogGrid {
 
 /**
  * Grid from about rMin to rEnd (exactly rEnd, or exactly `anchor` with rEnd on the grid beyond it).
- * The first point is at or just below rMin.
+ * The first point is at rMin or less than one step above it (never below: a table starts there).
  */
 export function logGrid(rMin: number, rEnd: number, step: number, anchor?: number): LogGrid {
   let xEnd = Math.log(rEnd);
@@ -26,7 +26,7 @@ export function logGrid(rMin: number, rEnd: number, step: number, anchor?: numbe
     stepsBeyondAnchor = Math.ceil((xEnd - xAnchor) / step - 1e-9);
     xEnd = xAnchor + stepsBeyondAnchor * step;
   }
-  const points = Math.ceil((xEnd - Math.log(rMin)) / step - 1e-9) + 1;
+  const points = Math.floor((xEnd - Math.log(rMin)) / step + 1e-9) + 1;
   const r = new Float64Array(points);
   for (let i = 0; i < points; i++) r[i] = Math.exp(xEnd - (points - 1 - i) * step);
   // Exact values where they matter: a wall on the wall, a jump of V on its grid point.

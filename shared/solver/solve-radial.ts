@@ -206,7 +206,7 @@ export function solveRadial(request: SolveRadialRequest): RadialSolution {
       if (p.outerLimit !== undefined) {
         throw new OrbitalInputError(
           'levels',
-          `level ${levelName(levels - 1, l)} (E ≈ ${top.toPrecision(6)} hartree) has not died out by the last tabulated radius ${p.outerLimit} bohr: extend the table or give asymptoticCharge`,
+          `level ${levelName(levels - 1, l)} (E ≈ ${top.toPrecision(6)} hartree) has not died out by the last tabulated radius ${Number(p.outerLimit.toPrecision(6))} bohr: extend the table or give asymptoticCharge`,
         );
       }
       const kappa = Math.sqrt(Math.max(2 * mu * (system.vEff[system.vEff.length - 1] - top), 0));
