@@ -80,7 +80,11 @@ function planeInfo(plane: SliceKind['plane'], slice: Slice): PlaneInfo {
   };
 }
 
-/** Bilinear interpolation of the sampled values to a square raster of `pixels` a side, top row first. */
+/**
+ * Bilinear interpolation of the sampled values to a square raster of `pixels` a side, top row first.
+ * Where the time goes: one multiply-add chain and a table look-up per pixel (≈ 4 M pixels at
+ * 600 dpi for a large figure); the column weights are computed once.
+ */
 function colourField(
   slice: Slice,
   values: Float32Array,
@@ -90,21 +94,36 @@ function colourField(
   const { width: n } = slice;
   const rgba = new Uint8Array(pixels * pixels * 4);
   const perPixel = (n - 1) / pixels;
+  const column = new Int32Array(pixels);
+  const columnWeight = new Float64Array(pixels);
+  for (let px = 0; px < pixels; px++) {
+    const fi = (px + 0.5) * perPixel;
+    column[px] = Math.min(n - 2, Math.floor(fi));
+    columnWeight[px] = fi - column[px];
+  }
+  const { lut, lo, hi } = scale;
+  const k = 255 / (hi - lo);
   for (let py = 0; py < pixels; py++) {
     // Pixel centre at fraction (py + 0.5)/pixels from the top; sample row j counts from the bottom.
     const fj = n - 1 - (py + 0.5) * perPixel;
     const j0 = Math.min(n - 2, Math.max(0, Math.floor(fj)));
     const ty = fj - j0;
-    for (let px = 0; px < pixels; px++) {
-      const fi = (px + 0.5) * perPixel;
-      const i0 = Math.min(n - 2, Math.floor(fi));
-      const tx = fi - i0;
-      const a = values[i0 + n * j0];
-      const b = values[i0 + 1 + n * j0];
-      const c = values[i0 + n * (j0 + 1)];
-      const d = values[i0 + 1 + n * (j0 + 1)];
-      const v = (a + (b - a) * tx) * (1 - ty) + (c + (d - c) * tx) * ty;
-      scale.write(v, rgba, 4 * (py * pixels + px));
+    const row0 = n * j0;
+    const row1 = row0 + n;
+    let o = 4 * py * pixels;
+    for (let px = 0; px < pixels; px++, o += 4) {
+      const i0 = column[px];
+      const tx = columnWeight[px];
+      const a = values[row0 + i0];
+      const c = values[row1 + i0];
+      const top = a + (values[row0 + i0 + 1] - a) * tx;
+      const bottom = c + (values[row1 + i0 + 1] - c) * tx;
+      let e = Math.round((top + (bottom - top) * ty - lo) * k);
+      e = e < 0 ? 0 : e > 255 ? 255 : e;
+      rgba[o] = lut[3 * e];
+      rgba[o + 1] = lut[3 * e + 1];
+      rgba[o + 2] = lut[3 * e + 2];
+      rgba[o + 3] = 255;
     }
   }
   return rgba;

@@ -27,6 +27,8 @@ export interface ColourScale {
   /** Value range the scale spans (density: [0, max]; ψ: [−max, max]). */
   lo: number;
   hi: number;
+  /** 256 RGB entries spanning lo … hi, for loops that colour many pixels. */
+  lut: Uint8Array;
   /** Writes the colour of value v as bytes into out at offset (RGBA, alpha 255). */
   write(v: number, out: Uint8Array, offset: number): void;
 }
@@ -48,6 +50,7 @@ function fromTable(lut: Uint8Array, lo: number, hi: number): ColourScale {
   return {
     lo,
     hi,
+    lut,
     write(v, out, offset) {
       let i = Math.round((v - lo) * k);
       i = i < 0 ? 0 : i > 255 ? 255 : i;

@@ -4,7 +4,8 @@ import sharp from 'sharp';
 import { describe, expect, it } from 'vitest';
 import { pixelSize, sceneToPng } from '../../../api/render/scene-to-png';
 import { buildFigureScene } from '../../../shared/figures/build-figure-scene';
-import { resolved } from '../figures/figure-test-helpers';
+import type { ImageNode } from '../../../shared/figures/scene';
+import { nodesWithRole, resolved } from '../figures/figure-test-helpers';
 
 function radialSpec(background: 'white' | 'transparent') {
   return resolved({
@@ -45,5 +46,36 @@ describe('scene to PNG', () => {
     const a = await sceneToPng(buildFigureScene(radialSpec('white')));
     const b = await sceneToPng(buildFigureScene(radialSpec('white')));
     expect(Buffer.compare(a, b)).toBe(0);
+  });
+
+  it('when a slice is printed, then its colour field lands on the page pixel for pixel', async () => {
+    const scene = buildFigureScene(
+      resolved({
+        schemaVersion: 1,
+        state: { terms: [{ n: 2, l: 1, m: 0 }] },
+        kind: {
+          type: 'slice',
+          plane: 'xz',
+          quantity: 'psi',
+          contours: { mode: 'enclosed', fractions: [] },
+        },
+        print: { widthMm: 84, heightMm: 80, dpi: 300, background: 'white' },
+      }),
+    );
+    const field = nodesWithRole(scene.children, 'colour-field')[0] as ImageNode;
+    const { data, info } = await sharp(await sceneToPng(scene))
+      .raw()
+      .toBuffer({ resolveWithObject: true });
+    const left = Math.round((field.x * 300) / 25.4);
+    const top = Math.round((field.y * 300) / 25.4);
+    for (const [ix, iy] of [
+      [5, 5],
+      [field.pixelWidth >> 1, field.pixelHeight >> 2],
+      [field.pixelWidth - 6, field.pixelHeight - 6],
+    ]) {
+      const page = 4 * ((top + iy) * info.width + left + ix);
+      const src = 4 * (iy * field.pixelWidth + ix);
+      expect([...data.subarray(page, page + 4)]).toEqual([...field.rgba.subarray(src, src + 4)]);
+    }
   });
 });
