@@ -8,6 +8,7 @@ const commands: Record<string, () => Promise<{ default: CliCommand }>> = {
   ylm: () => import('./commands/ylm'),
   props: () => import('./commands/props'),
   isosurface: () => import('./commands/isosurface'),
+  solve: () => import('./commands/solve'),
   render: () => import('./commands/render'),
 };
 
