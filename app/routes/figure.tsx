@@ -19,6 +19,7 @@ import { useHouseStyle } from '../features/house-style/api/get-house-style';
 import { useProject } from '../features/projects/api/get-project';
 import { projectsQueryKey } from '../features/projects/api/get-projects';
 import { useDocumentTitle } from '../hooks/use-document-title';
+import { Figure3dView, hasThreeDimensionalView } from './figure-3d-view';
 import { NotFoundRoute } from './not-found';
 import { parseIdParam } from './parse-id-param';
 
@@ -112,6 +113,19 @@ function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
         </div>
       </PageHeader>
 
+      {hasThreeDimensionalView(figure.spec) && (
+        <div className="mb-6">
+          <Panel id="view-title" title="3D view">
+            {houseStyle.isPending ? (
+              <Loading label="Loading the project’s house style…" />
+            ) : houseStyle.isError ? (
+              <ErrorPanel error={houseStyle.error} onRetry={() => void houseStyle.refetch()} />
+            ) : (
+              <Figure3dView figure={figure} houseStyle={houseStyle.data} canEdit={canEdit} />
+            )}
+          </Panel>
+        </div>
+      )}
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Panel id="details-title" title="Details">
           {canEdit ? (

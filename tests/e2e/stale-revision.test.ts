@@ -103,4 +103,21 @@ describe('two editors saving the same figure', () => {
     await saveScreenshot(ravi, 'revision-restored');
     expect(problems).toEqual([]);
   });
+
+  it('when the editor turns the 3D view with the keyboard and keeps it, then the view is saved as revision 5', async () => {
+    const view = ravi.getByRole('group', { name: /3D figure/ });
+    await view.focus();
+    await ravi.keyboard.press('ArrowRight');
+    const bar = ravi.getByText(/^Shown turned to azimuth 50°, elevation 20°, zoom 1;/);
+    await bar.waitFor();
+    await ravi.getByRole('button', { name: 'Keep this view as a new revision' }).click();
+    await bar.waitFor({ state: 'detached' });
+    const summary = ravi.getByRole('region', { name: 'What the figure shows' });
+    await summary.getByText('Azimuth 50°, elevation 20°, orthographic, zoom 1').waitFor();
+    await ravi
+      .getByRole('region', { name: 'Revisions' })
+      .getByRole('cell', { name: 'View: azimuth 50°, elevation 20°, zoom 1' })
+      .waitFor();
+    expect(problems).toEqual([]);
+  });
 });
