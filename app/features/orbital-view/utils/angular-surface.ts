@@ -15,6 +15,7 @@ import { solidHarmonicValue } from '../../../../shared/physics/solid-harmonic';
 import { physicsTriplesToThree, vertexNormals, type MeshArrays } from './mesh-arrays';
 
 export interface AngularSurface {
+  /** The F ≥ 0 part; for |F| of a complex state the whole surface, with arg F per vertex. */
   readonly positive: MeshArrays;
   readonly negative: MeshArrays | null;
   /** Largest |F| over the net (the surface's radius, in the dimensionless units of S_lm). */
@@ -36,6 +37,8 @@ export function buildAngularSurface(
   const vertexCount = 2 + ringCount * longitudes;
   const positions = new Float32Array(3 * vertexCount);
   const values = new Float64Array(vertexCount);
+  // |F| of a complex state carries arg F per vertex, for colouring by phase.
+  const phases = quantity === 'abs' && !c.isReal ? new Float32Array(vertexCount) : null;
   const terms = c.realTerms;
   let maxRadius = 0;
 
@@ -50,6 +53,7 @@ export function buildAngularSurface(
     const value = quantity === 'real' ? re : Math.hypot(re, im);
     const radius = Math.abs(value);
     values[v] = value;
+    if (phases) phases[v] = Math.atan2(im, re);
     positions[3 * v] = x * radius;
     positions[3 * v + 1] = y * radius;
     positions[3 * v + 2] = z * radius;
@@ -99,7 +103,7 @@ export function buildAngularSurface(
     positions: positions.slice(),
     normals: normals.slice(),
     indices: Uint32Array.from(list),
-    phases: null,
+    phases: phases ? phases.slice() : null,
   });
   const shells = new Set(terms.map((t) => `${t.n},${t.l}`));
   return {

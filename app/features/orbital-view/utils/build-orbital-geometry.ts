@@ -63,7 +63,10 @@ export function buildOrbitalGeometry(
         }
       : null,
   };
-  if (!state.isReal) notes.push('ψ is complex here: colours show the phase arg ψ, not a sign.');
+  const phaseNote = 'ψ is complex here: colours show the phase arg ψ, not a sign.';
+  // Complex states are coloured by phase (isosurface, cloud, |F| angular plots).
+  if (!state.isReal && !(kind.type === 'angular' && kind.quantity === 'real'))
+    notes.push(phaseNote);
 
   let geometry: Omit<OrbitalGeometry, 'nodalSheets' | 'notes' | 'facts'> & {
     facts: Omit<OrbitalFacts, 'ms'>;
@@ -184,12 +187,16 @@ export function buildOrbitalGeometry(
     );
     if (angular.mixesShells)
       notes.push(
-        'The terms belong to different l: the plot combines their angular factors and leaves out the radial parts.',
+        'The terms belong to different shells (n, l): the plot adds their angular factors and leaves out the radial parts, so it is not the shape of ψ at any one radius.',
       );
+    if (!state.isReal && kind.quantity === 'real') {
+      notes.push('ψ is complex here: the plot shows the real part of its angular factor.');
+    }
+    const byPhase = angular.positive.phases !== null;
     const surfaces: SurfaceSet = {
-      positive: angular.positive,
+      positive: byPhase ? null : angular.positive,
       negative: angular.negative,
-      phase: null,
+      phase: byPhase ? angular.positive : null,
     };
     geometry = {
       kind: 'angular',
@@ -204,8 +211,9 @@ export function buildOrbitalGeometry(
         kind: 'angular',
         triangles: {
           ...emptyFacts.triangles,
-          positive: angular.positive.indices.length / 3,
+          positive: byPhase ? 0 : angular.positive.indices.length / 3,
           negative: (angular.negative?.indices.length ?? 0) / 3,
+          phase: byPhase ? angular.positive.indices.length / 3 : 0,
           total: angular.positive.indices.length / 3 + (angular.negative?.indices.length ?? 0) / 3,
         },
       },
