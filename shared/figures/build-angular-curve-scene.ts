@@ -208,7 +208,10 @@ export function buildAngularCurveScene(spec: ResolvedFigureSpec): FigureScene {
     (best, d) => (reachNear(d) < reachNear(best) - 1e-9 ? d : best),
     diagonals[0],
   );
+  const reachAtLabels = reachNear(labelAngle);
   for (const t of ticks.values.slice(1)) {
+    // A value inside a lobe would sit on the filled curve: only circles outside it are numbered.
+    if (t < reachAtLabels * 1.05) continue;
     const [x, y] = at(labelAngle, t);
     out.push(
       text(
