@@ -20,7 +20,8 @@ import type { OrbitalFacts } from '../../app/features/orbital-view/utils/orbital
 import type { PrintProjection } from '../../app/features/orbital-view/utils/print-projection';
 import type { PrintJob } from '../../app/print-3d';
 
-export const CHROMIUM_PATH = '/usr/bin/chromium';
+/** Debian's Chromium; LOBEWRIGHT_CHROMIUM points elsewhere (the same switch as the browser tests). */
+export const CHROMIUM_PATH = process.env.LOBEWRIGHT_CHROMIUM ?? '/usr/bin/chromium';
 const CHROMIUM_ARGS = [
   '--no-sandbox',
   '--disable-gpu',

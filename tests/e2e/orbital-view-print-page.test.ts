@@ -5,9 +5,9 @@ import { createReadStream, existsSync, statSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
-import { chromium, type Browser } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CHROMIUM_PATH } from '../../api/render/render-3d';
+import { launchChromium } from './support/chromium';
 
 const DIST = path.resolve('dist/app');
 const job = (spec: unknown, widthPx = 300, heightPx = 200) => ({ spec, widthPx, heightPx });
@@ -34,10 +34,7 @@ describe('print-3d.html', () => {
     });
     await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
     base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-    browser = await chromium.launch({
-      executablePath: CHROMIUM_PATH,
-      args: ['--no-sandbox', '--disable-gpu'],
-    });
+    browser = await launchChromium();
   });
 
   afterAll(async () => {

@@ -2,18 +2,44 @@
 // surfaces (both phases, optional outer surface), cloud, nodal sheets, axes and scale bar.
 import { useMemo } from 'react';
 import type { ResolvedFigureSpec } from '../../../../shared/spec/resolve-figure-spec';
-import type { OrbitalGeometry } from '../utils/orbital-geometry';
+import type { OrbitalGeometry, SurfaceSet } from '../utils/orbital-geometry';
 import type { ScaleBarLayout } from '../utils/scale-bar-layout';
 import { Axes } from './axes';
 import { CloudPoints } from './cloud-points';
 import { NodalSheets } from './nodal-sheets';
 import { ScaleBar } from './scale-bar';
 import { SceneCamera } from './scene-camera';
-import { SceneLighting } from './scene-lighting';
+import { SceneLighting, type LightingPreset } from './scene-lighting';
 import { SurfaceMesh } from './surface-mesh';
 
 /** Colour of axes and scale bar. */
 export const GUIDE_COLOUR = '#334155';
+
+interface SurfaceSetMeshesProps {
+  set: SurfaceSet;
+  colours: { positive: string; negative: string };
+  opacity: number;
+  lighting: LightingPreset;
+  translucentLayer?: boolean;
+}
+
+/** The two phases of a real state, or the phase-coloured surface of a complex one. */
+function SurfaceSetMeshes({
+  set,
+  colours,
+  opacity,
+  lighting,
+  translucentLayer,
+}: SurfaceSetMeshesProps) {
+  const common = { opacity, lighting, translucentLayer };
+  return (
+    <>
+      <SurfaceMesh mesh={set.positive} colour={colours.positive} {...common} />
+      <SurfaceMesh mesh={set.negative} colour={colours.negative} {...common} />
+      <SurfaceMesh mesh={set.phase} colour={colours.positive} phaseColour={colours} {...common} />
+    </>
+  );
+}
 
 export interface OrbitalSceneProps {
   geometry: OrbitalGeometry;
@@ -61,53 +87,21 @@ export function OrbitalScene({
         ) : null}
       </SceneCamera>
       {surfaces ? (
-        <>
-          <SurfaceMesh
-            mesh={surfaces.positive}
-            colour={colours.positive}
-            opacity={look.opacity}
-            lighting={lighting}
-          />
-          <SurfaceMesh
-            mesh={surfaces.negative}
-            colour={colours.negative}
-            opacity={look.opacity}
-            lighting={lighting}
-          />
-          <SurfaceMesh
-            mesh={surfaces.phase}
-            colour={colours.positive}
-            phaseColour={colours}
-            opacity={look.opacity}
-            lighting={lighting}
-          />
-        </>
+        <SurfaceSetMeshes
+          set={surfaces}
+          colours={colours}
+          opacity={look.opacity}
+          lighting={lighting}
+        />
       ) : null}
       {outer ? (
-        <>
-          <SurfaceMesh
-            mesh={outer.positive}
-            colour={colours.positive}
-            opacity={outerOpacity}
-            lighting={lighting}
-            translucentLayer
-          />
-          <SurfaceMesh
-            mesh={outer.negative}
-            colour={colours.negative}
-            opacity={outerOpacity}
-            lighting={lighting}
-            translucentLayer
-          />
-          <SurfaceMesh
-            mesh={outer.phase}
-            colour={colours.positive}
-            phaseColour={colours}
-            opacity={outerOpacity}
-            lighting={lighting}
-            translucentLayer
-          />
-        </>
+        <SurfaceSetMeshes
+          set={outer}
+          colours={colours}
+          opacity={outerOpacity}
+          lighting={lighting}
+          translucentLayer
+        />
       ) : null}
       {geometry.cloud ? (
         <CloudPoints
