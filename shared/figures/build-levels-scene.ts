@@ -9,6 +9,7 @@
  * with the series prefixes Ly, H, Pa, Br, Pf, Hu (common practice in spectroscopy).
  */
 import { energyLevels } from '../physics/energy-levels';
+import { MAX_PRINCIPAL_QUANTUM_NUMBER } from '../physics/quantum-numbers';
 import { spectralLine, type SpectralLine } from '../physics/spectral-lines';
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
 import { FigureSpecError } from './figure-error';
@@ -50,31 +51,55 @@ const SERIES_PREFIX: Record<string, string> = {
 const plain = (t: string): TextRun => ({ text: t, shift: 'base' });
 const italic = (t: string): TextRun => ({ text: t, shift: 'base', italic: true });
 
-/** "Hα", "Lyβ", … or "7→3" where no conventional name exists. */
-export function lineName(line: Pick<SpectralLine, 'series' | 'nUpper' | 'nLower'>): string {
+/** "Hα", "Lyβ", … for hydrogen (Z = 1), else "7→3" (the series names are hydrogen's). */
+export function lineName(line: Pick<SpectralLine, 'series' | 'nUpper' | 'nLower'>, Z = 1): string {
   const step = line.nUpper - line.nLower;
-  if (line.series === null || step > GREEK.length) return `${line.nUpper}→${line.nLower}`;
+  if (Z !== 1 || line.series === null || step > GREEK.length)
+    return `${line.nUpper}→${line.nLower}`;
   return `${SERIES_PREFIX[line.series]}${GREEK[step - 1]}`;
 }
 
 /**
- * Moves label baselines apart (at least `gap`), top to bottom, never above `topBound`: labels of
- * levels crowding towards the limit move down into the wider gaps below.
+ * Moves label baselines apart (at least `gap`) while keeping each group of crowded labels centred
+ * on the levels it names (clusters merged until none overlap), never above `topBound`.
  */
 function spreadLabels(desired: readonly number[], gap: number, topBound: number): number[] {
   const order = desired.map((y, i) => ({ y, i })).sort((a, b) => a.y - b.y);
-  const placed = new Array<number>(desired.length);
-  let previous = topBound - gap;
-  for (const { y, i } of order) {
-    const at = Math.max(y, previous + gap);
-    placed[i] = at;
-    previous = at;
+  type Cluster = { items: typeof order; top: number };
+  const place = (items: typeof order): number => {
+    const mean = items.reduce((sum, it, k) => sum + it.y - k * gap, 0) / items.length;
+    return Math.max(topBound, mean);
+  };
+  let clusters: Cluster[] = order.map((it) => ({ items: [it], top: Math.max(topBound, it.y) }));
+  let merged = true;
+  while (merged) {
+    merged = false;
+    const next: Cluster[] = [];
+    for (const c of clusters) {
+      const last = next[next.length - 1];
+      if (last && last.top + last.items.length * gap > c.top + 1e-9) {
+        const items = [...last.items, ...c.items];
+        next[next.length - 1] = { items, top: place(items) };
+        merged = true;
+      } else {
+        next.push(c);
+      }
+    }
+    clusters = next;
   }
+  const placed = new Array<number>(desired.length);
+  for (const c of clusters) c.items.forEach((it, k) => (placed[it.i] = c.top + k * gap));
   return placed;
 }
 
 function checkTransitions(kind: LevelsKind): void {
   kind.transitions.forEach((t, i) => {
+    if (t.upper > MAX_PRINCIPAL_QUANTUM_NUMBER) {
+      throw new FigureSpecError(
+        `kind.transitions[${i}].upper`,
+        `must be at most ${MAX_PRINCIPAL_QUANTUM_NUMBER}, got ${t.upper}`,
+      );
+    }
     if (t.upper <= t.lower)
       throw new FigureSpecError(
         `kind.transitions[${i}].upper`,
@@ -144,13 +169,14 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
   // Key rows: per series a heading, per line its name and wavelengths.
   const keySize = style.smallSizePt;
   const keyRows: KeyRow[] = [];
-  let lastSeries: string | null | undefined;
+  let lastLower: number | undefined;
   lines.forEach((line, i) => {
-    if (line.series !== lastSeries) {
+    const series = Z === 1 ? line.series : null;
+    if (line.nLower !== lastLower) {
       keyRows.push({
         runs: [
           {
-            text: line.series ? `${line.series} series` : `Lines to n = ${line.nLower}`,
+            text: series ? `${series} series` : `Lines to n = ${line.nLower}`,
             shift: 'base',
             weight: 600,
           },
@@ -159,18 +185,20 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
         colour: style.ink,
         role: 'key-series',
       });
-      lastSeries = line.series;
+      lastLower = line.nLower;
     }
-    const name = lineName(line);
+    const name = lineName(line, Z);
     const vac = `${formatSignificant(line.vacuumNm, WAVELENGTH_DIGITS)} nm`;
     keyRows.push({
-      runs: [plain(`${name}  `), plain(`${line.nUpper}→${line.nLower}  `), plain(vac)],
+      runs: name.includes('→')
+        ? [plain(`${name}  `), plain(vac)]
+        : [plain(`${name}  `), plain(`${line.nUpper}→${line.nLower}  `), plain(vac)],
       sizePt: keySize,
       colour: style.curveColours[i % 2 === 0 ? 0 : 1],
       role: 'key-line',
     });
     facts.push({
-      name: `${line.series ?? 'line'} ${name} vacuum wavelength`,
+      name: `${series ? `${series} ` : ''}${name} vacuum wavelength`,
       value: line.vacuumNm,
       unit: 'nm',
       printed: vac,
@@ -184,7 +212,7 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
         role: 'key-air',
       });
       facts.push({
-        name: `${line.series ?? 'line'} ${name} air wavelength`,
+        name: `${series ? `${series} ` : ''}${name} air wavelength`,
         value: line.airNm,
         unit: 'nm',
         printed: air,
@@ -306,7 +334,7 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
       [x, (yUp + yLow) / 2],
       capHeightMm(labelSize),
       (lx, ly, anchor) =>
-        text(lx, ly, [plain(lineName(line))], labelSize, anchor, colour, 'transition-label'),
+        text(lx, ly, [plain(lineName(line, Z))], labelSize, anchor, colour, 'transition-label'),
     );
     if (placed) nodes.push(placed.label);
   }
@@ -332,7 +360,7 @@ export function buildLevelsScene(spec: ResolvedFigureSpec): FigureScene {
     );
   return sceneForSpec(spec, nodes, {
     title: `Energy levels n = 1 … ${kind.nMax} (${system})`,
-    altText: `Energy-level diagram of ${system}: levels ${levels.map((lv) => `n = ${lv.n} at ${formatSignificant(lv.eV, ENERGY_DIGITS)} eV`).join(', ')}; ionisation limit at 0 eV.${lines.length ? ` Transitions: ${lines.map((l) => `${lineName(l)} (${l.nUpper} → ${l.nLower}) at ${formatSignificant(l.vacuumNm, WAVELENGTH_DIGITS)} nm in vacuum${l.airNm !== null ? `, ${formatSignificant(l.airNm, WAVELENGTH_DIGITS)} nm in air` : ''}`).join('; ')}.` : ''}`,
+    altText: `Energy-level diagram of ${system}: levels ${levels.map((lv) => `n = ${lv.n} at ${formatSignificant(lv.eV, ENERGY_DIGITS)} eV`).join(', ')}; ionisation limit at 0 eV.${lines.length ? ` Transitions: ${lines.map((l) => `${lineName(l, Z)} (${l.nUpper} → ${l.nLower}) at ${formatSignificant(l.vacuumNm, WAVELENGTH_DIGITS)} nm in vacuum${l.airNm !== null ? `, ${formatSignificant(l.airNm, WAVELENGTH_DIGITS)} nm in air` : ''}`).join('; ')}.` : ''}`,
     facts,
     notes,
   });

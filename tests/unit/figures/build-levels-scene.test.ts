@@ -68,4 +68,18 @@ describe('energy-level diagram scene', () => {
       new FigureSpecError('kind.transitions[0].upper', 'must be greater than lower = 3, got 2'),
     );
   });
+
+  it('when the ion is not hydrogen, then lines are named by their levels, not by hydrogen's series', () => {
+    const scene = buildFigureScene(
+      resolved({
+        schemaVersion: 1,
+        system: { Z: 2, nucleus: 'He-4' },
+        state: { terms: [{ n: 1, l: 0, m: 0 }] },
+        kind: { type: 'levels', nMax: 4, transitions: [{ upper: 3, lower: 2 }] },
+        print: { widthMm: 120, heightMm: 80 },
+      }),
+    );
+    expect(textsWithRole(scene, 'key-series').map((t) => runsText(t.runs))).toEqual(['Lines to n = 2']);
+    expect(textsWithRole(scene, 'transition-label').map((t) => runsText(t.runs))).toEqual(['3→2']);
+  });
 });
