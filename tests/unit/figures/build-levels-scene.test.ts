@@ -69,7 +69,7 @@ describe('energy-level diagram scene', () => {
     );
   });
 
-  it('when the ion is not hydrogen, then lines are named by their levels, not by hydrogen's series', () => {
+  it("when the ion is not hydrogen, then lines are named by their levels, not by hydrogen's series", () => {
     const scene = buildFigureScene(
       resolved({
         schemaVersion: 1,
@@ -79,7 +79,9 @@ describe('energy-level diagram scene', () => {
         print: { widthMm: 120, heightMm: 80 },
       }),
     );
-    expect(textsWithRole(scene, 'key-series').map((t) => runsText(t.runs))).toEqual(['Lines to n = 2']);
+    expect(textsWithRole(scene, 'key-series').map((t) => runsText(t.runs))).toEqual([
+      'Lines to n = 2',
+    ]);
     expect(textsWithRole(scene, 'transition-label').map((t) => runsText(t.runs))).toEqual(['3→2']);
   });
 });
