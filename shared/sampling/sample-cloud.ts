@@ -3,17 +3,20 @@
  * reproducibly for a seed, with arg ψ at each point for colouring by phase or sign.
  *
  * Method. In the real basis the state is ψ = Σ_k c_k φ_k with real orthonormal φ_k = R_nl S_lm
- * (../physics/orbital-state, realTerms) and Σ|c_k|² = 1.
- *  • One term: r from r²R_nl² (./radial-sampler, inverse CDF on a fine tabulation); the direction
- *    by rejection: a uniform direction û is kept with probability S_lm(û)²/B_l, where
- *    B_l = (2l+1)/(4π) bounds S_lm² everywhere, because Σ_m S_lm² = Σ_m |Y_l^m|² = (2l+1)/(4π)
- *    (Unsöld's theorem; the addition theorem of spherical harmonics at γ = 0, e.g. Jackson,
- *    Classical Electrodynamics, 3rd ed., eq. 3.69, number from memory). Mean acceptance 1/(2l+1).
- *  • Superposition of K terms: candidates x come from the mixture q(x) = Σ_k |c_k|² φ_k(x)² (pick k
- *    with probability |c_k|², then draw from φ_k² as above) and are kept with probability
- *    |ψ(x)|² / (K q(x)). This is a valid rejection sampler because |ψ|² ≤ K q everywhere, by
- *    Cauchy–Schwarz: |Σ_k c_k φ_k|² ≤ (Σ_k 1)(Σ_k |c_k|² φ_k²). Kept points then have density
- *    exactly |ψ|²; mean acceptance 1/K (∫|ψ|² = 1, ∫K q = K). With K = 1 nothing is rejected.
+ * (../physics/orbital-state, realTerms) and Σ|c_k|² = 1. Terms of one shell (n, l) form a group
+ * g with ψ_g = R_nl(r) F_g(r̂), F_g = Σ_{k∈g} c_k S_k, and weight w_g = Σ_{k∈g} |c_k|² = ∫|ψ_g|².
+ *  • One group: r from r²R_nl² (./radial-sampler, inverse CDF on a fine tabulation); the direction
+ *    by rejection: a uniform direction û is kept with probability |F_g(û)|²/(w_g B_l), where
+ *    B_l = (2l+1)/(4π). This bound holds everywhere: |Σ c_k S_k|² ≤ (Σ|c_k|²)(Σ_k S_k²) by
+ *    Cauchy–Schwarz, and Σ_k S_k² ≤ Σ_m S_lm² = Σ_m |Y_l^m|² = (2l+1)/(4π) (Unsöld's theorem, the
+ *    addition theorem of spherical harmonics at γ = 0, e.g. Jackson, Classical Electrodynamics,
+ *    3rd ed., eq. 3.69, number from memory). Mean acceptance w_g B_l over ∫|F_g|² dΩ = 1/(2l+1)
+ *    for a single term, more for a complex Y_l^m.
+ *  • G groups: candidates x come from the mixture q(x) = Σ_g |ψ_g(x)|² (pick g with probability
+ *    w_g, then draw from |ψ_g|²/w_g as above) and are kept with probability |ψ(x)|²/(G q(x)).
+ *    This is a valid rejection sampler because |ψ|² = |Σ_g ψ_g|² ≤ G Σ_g |ψ_g|² = G q everywhere
+ *    (Cauchy–Schwarz); kept points then have density exactly |ψ|²; mean acceptance 1/G
+ *    (∫|ψ|² = 1, ∫G q = G). With one shell (any single orbital, real or complex) nothing is rejected.
  * φ_k(x) is computed from the compiled term exactly as accumulateTerms does (radialScale·e^{−ρ/2}·L·r^l S).
  * Exactness is limited only by the radial tabulation (bias < 1e-6 relative, see ./radial-sampler)
  * and by the 1e-12 of probability it leaves out at large r.
@@ -29,7 +32,7 @@ import { xoshiro128, type RandomSource } from './xoshiro128';
 
 /** Largest cloud drawn at once (12 MB of positions and phases). */
 export const MAX_CLOUD_POINTS = 1_000_000;
-/** Candidates allowed per requested point before giving up (mean need: K·(2l+1) ≤ 64·59 direction tries). */
+/** Candidates allowed per requested point before giving up (mean need: G ≤ 64 candidates). */
 const MAX_ATTEMPTS_PER_POINT = 100_000;
 const FOUR_PI = 4 * Math.PI;
 const PROGRESS_EVERY = 8192;
@@ -53,10 +56,10 @@ export interface CloudOptions {
   onProgress?: (done: number) => void;
 }
 
-interface TermDraw {
-  term: CompiledRealTerm;
+/** One shell (n, l) of the state: its terms, radial table and direction bound w_g (2l+1)/(4π). */
+interface ShellDraw {
+  terms: CompiledRealTerm[];
   radial: RadialSampler;
-  /** S_lm² bound (2l+1)/(4π). */
   bound: number;
 }
 
@@ -75,27 +78,28 @@ export function sampleCloud(state: CompiledState, options: CloudOptions): Cloud 
     );
   }
   const terms = state.realTerms;
-  const K = terms.length;
-  // |c_k|² as given (the bound |ψ|² ≤ K Σ|c_k|²φ_k² holds for any c); picking probabilities are them over their sum.
-  const weights = new Float64Array(K);
-  let weightSum = 0;
-  for (let k = 0; k < K; k++) {
-    const c = terms[k].coefficient;
-    weights[k] = c.re * c.re + c.im * c.im;
-    weightSum += weights[k];
+  const shells = new Map<string, CompiledRealTerm[]>();
+  for (const term of terms) {
+    const key = `${term.n},${term.l}`;
+    shells.set(key, [...(shells.get(key) ?? []), term]);
   }
-  const pickCumulative = new Float64Array(K);
-  let running = 0;
-  for (let k = 0; k < K; k++) {
-    running += weights[k] / weightSum;
-    pickCumulative[k] = running;
-  }
-  pickCumulative[K - 1] = 1;
-  const draws: TermDraw[] = terms.map((term) => ({
-    term,
-    radial: radialSampler(term.n, term.l, state.zEff),
-    bound: (2 * term.l + 1) / FOUR_PI,
+  const draws: ShellDraw[] = [...shells.values()].map((group) => ({
+    terms: group,
+    radial: radialSampler(group[0].n, group[0].l, state.zEff),
+    bound: (weightOf(group) * (2 * group[0].l + 1)) / FOUR_PI,
   }));
+  const G = draws.length;
+  // Picking probabilities w_g over their sum (Σ w_g = 1 up to rounding).
+  const weightSum = draws.reduce((sum, d) => sum + weightOf(d.terms), 0);
+  const pickCumulative = new Float64Array(G);
+  let running = 0;
+  for (let g = 0; g < G; g++) {
+    running += weightOf(draws[g].terms) / weightSum;
+    pickCumulative[g] = running;
+  }
+  pickCumulative[G - 1] = 1;
+  const shellRe = new Float64Array(G);
+  const shellIm = new Float64Array(G);
 
   const random = xoshiro128(seed);
   const positions = new Float32Array(3 * count);
@@ -112,25 +116,25 @@ export function sampleCloud(state: CompiledState, options: CloudOptions): Cloud 
       );
     }
     candidates++;
-    const k = K === 1 ? 0 : pickTerm(pickCumulative, random.next());
-    drawFromTerm(draws[k], random, point);
+    const g = G === 1 ? 0 : pickTerm(pickCumulative, random.next());
+    drawFromShell(draws[g], random, point);
     const x = point[0];
     const y = point[1];
     const z = point[2];
+    const r2 = x * x + y * y + z * z;
+    const r = Math.sqrt(r2);
     let re = 0;
     let im = 0;
     let mixture = 0;
-    const r2 = x * x + y * y + z * z;
-    const r = Math.sqrt(r2);
-    for (let j = 0; j < K; j++) {
-      const phi = termValue(terms[j], x, y, z, r, r2);
-      re += terms[j].coefficient.re * phi;
-      im += terms[j].coefficient.im * phi;
-      mixture += weights[j] * phi * phi;
+    for (let h = 0; h < G; h++) {
+      shellValue(draws[h].terms, x, y, z, r, r2, shellRe, shellIm, h);
+      re += shellRe[h];
+      im += shellIm[h];
+      mixture += shellRe[h] * shellRe[h] + shellIm[h] * shellIm[h];
     }
-    if (K > 1) {
+    if (G > 1) {
       const density = re * re + im * im;
-      if (!(mixture > 0) || random.next() * K * mixture >= density) continue;
+      if (!(mixture > 0) || random.next() * G * mixture >= density) continue;
     }
     positions[3 * done] = x;
     positions[3 * done + 1] = y;
@@ -149,18 +153,31 @@ function pickTerm(cumulative: Float64Array, u: number): number {
   return k;
 }
 
-/** One point from φ_k²: radius from the radial table, direction by rejection against (2l+1)/(4π). */
-function drawFromTerm(draw: TermDraw, random: RandomSource, out: Float64Array): void {
+function weightOf(group: readonly CompiledRealTerm[]): number {
+  let w = 0;
+  for (const t of group)
+    w += t.coefficient.re * t.coefficient.re + t.coefficient.im * t.coefficient.im;
+  return w;
+}
+
+/** One point from |ψ_g|²: radius from the radial table, direction by rejection against w_g (2l+1)/(4π). */
+function drawFromShell(draw: ShellDraw, random: RandomSource, out: Float64Array): void {
   const r = draw.radial.draw(random);
-  const plan = draw.term.harmonic;
+  const terms = draw.terms;
   for (;;) {
     const cz = 1 - 2 * random.next();
     const azimuth = 2 * Math.PI * random.next();
     const s = Math.sqrt(Math.max(0, 1 - cz * cz));
     const ux = s * Math.cos(azimuth);
     const uy = s * Math.sin(azimuth);
-    const value = solidHarmonicValue(plan, ux, uy, cz, 1);
-    if (random.next() * draw.bound < value * value) {
+    let re = 0;
+    let im = 0;
+    for (const term of terms) {
+      const value = solidHarmonicValue(term.harmonic, ux, uy, cz, 1);
+      re += term.coefficient.re * value;
+      im += term.coefficient.im * value;
+    }
+    if (random.next() * draw.bound < re * re + im * im) {
       out[0] = r * ux;
       out[1] = r * uy;
       out[2] = r * cz;
@@ -169,20 +186,30 @@ function drawFromTerm(draw: TermDraw, random: RandomSource, out: Float64Array): 
   }
 }
 
-/** φ_k(x) = R_nl(r) S_lm(r̂), computed as in accumulateTerms. */
-function termValue(
-  term: CompiledRealTerm,
+/** ψ_g(x) = Σ_{k∈g} c_k R_nl(r) S_k(r̂), computed as in accumulateTerms, into re[h], im[h]. */
+function shellValue(
+  terms: readonly CompiledRealTerm[],
   x: number,
   y: number,
   z: number,
   r: number,
   r2: number,
-): number {
-  const rho = term.a * r;
-  return (
-    term.radialScale *
-    Math.exp(-rho / 2) *
-    assocLaguerre(term.degree, term.alpha, rho) *
-    solidHarmonicValue(term.harmonic, x, y, z, r2)
-  );
+  re: Float64Array,
+  im: Float64Array,
+  h: number,
+): void {
+  const first = terms[0];
+  const rho = first.a * r;
+  // R_nl(r)/r^l is shared by the shell; the solid harmonics carry r^l.
+  const radial =
+    first.radialScale * Math.exp(-rho / 2) * assocLaguerre(first.degree, first.alpha, rho);
+  let sumRe = 0;
+  let sumIm = 0;
+  for (const term of terms) {
+    const value = radial * solidHarmonicValue(term.harmonic, x, y, z, r2);
+    sumRe += term.coefficient.re * value;
+    sumIm += term.coefficient.im * value;
+  }
+  re[h] = sumRe;
+  im[h] = sumIm;
 }

@@ -117,6 +117,8 @@ describe('sampleCloud, angular distribution', () => {
   it('when complex 2p with m = +1 is sampled, then ⟨cos²θ⟩ = 1/5 and arg ψ − φ is constant', () => {
     // |Y_1^1|² = (3/8π) sin²θ: ⟨cos²θ⟩ = 0.2 (mpmath quad, 30 digits); Y_1^1 ∝ e^{iφ} (REFERENCE.md §5).
     const cloud = cloudOf([{ n: 2, l: 1, m: 1, basis: 'complex' }], 22);
+    // One shell: the direction bound covers Σ_k|c_k|²·(2l+1)/4π, so no candidate is rejected.
+    expect(cloud.candidates).toBe(N);
     expectStatistic(
       '2p(m=+1) ⟨cos²θ⟩',
       meanOf(cloud, (x, y, z) => (z * z) / (x * x + y * y + z * z)),
@@ -173,7 +175,13 @@ describe('sampleCloud, superpositions (rejection against the term mixture)', () 
       meanOf(cloud, (_x, _y, z) => z),
       -1.5,
     );
-    expect(cloud.candidates).toBeGreaterThan(cloud.count);
+    // Two shells (2s, 2p): each candidate is kept with mean probability exactly 1/2, so the number of
+    // candidates is N plus a negative binomial count with mean N and variance 2N.
+    const sd = Math.sqrt(2 * N);
+    expect(
+      Math.abs(cloud.candidates - 2 * N),
+      `candidates ${cloud.candidates}, expected ${2 * N} ± ${SIGMAS * sd}`,
+    ).toBeLessThanOrEqual(SIGMAS * sd);
   });
 });
 
