@@ -15,10 +15,16 @@ import { adminRoutes } from './routes/admin';
 import { authRoutes } from './routes/auth';
 import { figureRoutes } from './routes/figures';
 import { projectRoutes } from './routes/projects';
+import { reviewRoutes } from './routes/review';
+import { exportRoutes, projectExportRoutes } from './routes/exports';
+import { createMailer, type Mailer } from './mail/mailer';
 
 export interface AppDeps {
   env: Env;
   db: Knex;
+  mailer?: Mailer;
+  /** Queues an export run; absent where no job queue runs (exports then answer 503). */
+  enqueueExport?: (runId: number) => Promise<string | null>;
 }
 
 export interface BuiltApp {
@@ -26,7 +32,7 @@ export interface BuiltApp {
   close(): Promise<void>;
 }
 
-export function createApp({ env, db }: AppDeps): BuiltApp {
+export function createApp({ env, db, mailer = createMailer(env), enqueueExport }: AppDeps): BuiltApp {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -64,7 +70,10 @@ export function createApp({ env, db }: AppDeps): BuiltApp {
   app.use('/api/auth', authRoutes(db, env, p));
   app.use('/api/admin', adminRoutes(db));
   app.use('/api/projects', projectRoutes(db));
+  app.use('/api/projects', projectExportRoutes(db, enqueueExport ?? null));
+  app.use('/api/exports', exportRoutes(db));
   app.use('/api/figures', figureRoutes(db));
+  app.use('/api/figures', reviewRoutes(db, env, mailer));
   app.use('/api', notFoundHandler);
 
   if (env.CLIENT_DIST) {

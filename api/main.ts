@@ -1,23 +1,32 @@
-// Starts the Lobewright server: one process serving the API and the built client.
+// Starts the Lobewright server: one process serving the API and the built client, with the export
+// job queue (and, unless EXPORT_WORKER=off, its worker) running beside it.
 import { parseEnv } from './config/env';
 import { createDb } from './db/knex';
 import { createApp } from './app';
+import { startExportJobs } from './jobs/export-jobs';
+import { createMailer } from './mail/mailer';
+import { closeRender3d } from './render/render-3d';
 import { demoSignIns } from '../db/demo-data';
 
 const env = parseEnv();
 const db = createDb(env.DATABASE_URL);
-const { app, close } = createApp({ env, db });
+const mailer = createMailer(env);
+const jobs = await startExportJobs({ db, env, mailer, work: env.EXPORT_WORKER === 'inline' });
+const { app, close } = createApp({ env, db, mailer, enqueueExport: jobs.enqueue });
 
 const server = app.listen(env.PORT, env.HOST, () => {
   const url = `http://${env.HOST}:${env.PORT}`;
   console.log(`\nLobewright is running at ${url}\n`);
   console.log('Demo sign-ins (password for all: ' + demoSignIns.password + '):');
   for (const u of demoSignIns.users) console.log(`  ${u.email.padEnd(34)} ${u.what}`);
+  if (env.SMTP_URL) console.log(`\nOutgoing mail goes to ${env.SMTP_URL}`);
   console.log('\nPress Ctrl-C to stop.');
 });
 
 async function shutdown(): Promise<void> {
   server.close();
+  await jobs.stop();
+  await closeRender3d();
   await close();
   await db.destroy();
   process.exit(0);

@@ -3,10 +3,12 @@
 import type { Knex } from 'knex';
 import * as initial from './migrations/20261202000001_initial';
 import * as renderCache from './migrations/20261202000002_render_cache';
+import * as reviewAndExports from './migrations/20261202000003_review_and_exports';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000001_initial': initial,
   '20261202000002_render_cache': renderCache,
+  '20261202000003_review_and_exports': reviewAndExports,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -14,6 +14,11 @@ const envSchema = z.object({
   /** Serve the built client from this folder when set. */
   CLIENT_DIST: z.string().optional(),
   PUBLIC_URL: z.string().url().optional(),
+  /** SMTP server for outgoing mail, e.g. smtp://127.0.0.1:2525 (scripts/start runs a local fake). */
+  SMTP_URL: z.string().url().optional(),
+  MAIL_FROM: z.string().default('Lobewright <no-reply@lobewright.example>'),
+  /** "inline" runs export jobs in the server process; "off" leaves them to `api/worker.ts`. */
+  EXPORT_WORKER: z.enum(['inline', 'off']).default('inline'),
 });
 export type Env = z.infer<typeof envSchema>;
 

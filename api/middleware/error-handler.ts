@@ -11,7 +11,12 @@ export const notFoundHandler: RequestHandler = (req, res) => {
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   if (err instanceof AppError) {
     res.status(err.status).json({
-      error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
+      error: {
+        code: err.code,
+        message: err.message,
+        ...(err.fields ? { fields: err.fields } : {}),
+        ...(err.details ? { details: err.details } : {}),
+      },
     });
     return;
   }

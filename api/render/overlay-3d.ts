@@ -4,6 +4,9 @@ import type { SceneNode } from '../../shared/figures/scene';
 import type { ResolvedFigureSpec } from '../../shared/spec/resolve-figure-spec';
 import type { PrintProjection } from '../../app/features/orbital-view/utils/print-projection';
 
-export function build3dOverlayNodes(_spec: ResolvedFigureSpec, _projection: PrintProjection): SceneNode[] {
+export function build3dOverlayNodes(
+  _spec: ResolvedFigureSpec,
+  _projection: PrintProjection,
+): SceneNode[] {
   return [];
 }

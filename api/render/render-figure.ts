@@ -43,7 +43,9 @@ const CONTENT_TYPES: Record<RenderFormat, string> = {
 
 export function is3dKind(spec: ResolvedFigureSpec): boolean {
   const k = spec.kind;
-  return k.type === 'isosurface' || k.type === 'cloud' || (k.type === 'angular' && k.mode === 'surface');
+  return (
+    k.type === 'isosurface' || k.type === 'cloud' || (k.type === 'angular' && k.mode === 'surface')
+  );
 }
 
 export async function renderFigure(
@@ -52,9 +54,13 @@ export async function renderFigure(
   options: RenderOptions = {},
 ): Promise<RenderedFile> {
   if (options.cmyk && format !== 'tiff') {
-    throw new AppError(400, 'invalid_request', 'cmyk applies to TIFF only', { cmyk: 'CMYK conversion is offered for TIFF only' });
+    throw new AppError(400, 'invalid_request', 'cmyk applies to TIFF only', {
+      cmyk: 'CMYK conversion is offered for TIFF only',
+    });
   }
-  const { scene, rasterPng, facts } = is3dKind(spec) ? await render3d(spec, options) : render2d(spec);
+  const { scene, rasterPng, facts } = is3dKind(spec)
+    ? await render3d(spec, options)
+    : render2d(spec);
   const notes = [...scene.metadata.notes];
   const done = (bytes: Buffer): RenderedFile => ({
     bytes,
@@ -82,9 +88,15 @@ export async function renderFigure(
   }
 }
 
-function render2d(spec: ResolvedFigureSpec): { scene: FigureScene; rasterPng: null; facts: Record<string, unknown> } {
+function render2d(spec: ResolvedFigureSpec): {
+  scene: FigureScene;
+  rasterPng: null;
+  facts: Record<string, unknown>;
+} {
   const scene = buildFigureScene(spec);
-  const facts = Object.fromEntries(scene.metadata.facts.map((f) => [f.name, { value: f.value, unit: f.unit, printed: f.printed }]));
+  const facts = Object.fromEntries(
+    scene.metadata.facts.map((f) => [f.name, { value: f.value, unit: f.unit, printed: f.printed }]),
+  );
   return { scene, rasterPng: null, facts };
 }
 
@@ -125,5 +137,7 @@ export async function pngToTiff(png: Buffer, dpi: number, cmyk: boolean): Promis
   const img = cmyk
     ? sharp(png).flatten({ background: '#ffffff' }).withIccProfile('cmyk')
     : sharp(png).withIccProfile('srgb');
-  return img.tiff({ compression: 'lzw', xres: dpi / 25.4, yres: dpi / 25.4, resolutionUnit: 'inch' }).toBuffer();
+  return img
+    .tiff({ compression: 'lzw', xres: dpi / 25.4, yres: dpi / 25.4, resolutionUnit: 'inch' })
+    .toBuffer();
 }

@@ -4,6 +4,8 @@ import type { Knex } from 'knex';
 import { z } from 'zod';
 import {
   addMemberBody,
+  bulkFigureBody,
+  figureOrderBody,
   changeRoleBody,
   createFigureBody,
   createProjectBody,
@@ -26,6 +28,7 @@ import {
 } from '../repositories/projects';
 import { findUserByEmail } from '../repositories/users';
 import { createFigure } from '../services/figures';
+import { bulkFigureAction, reorderFigures } from '../services/figure-list';
 import { authoriseProject } from '../services/project-access';
 
 const projectParams = z.object({ projectId: idParam });
@@ -160,6 +163,24 @@ export function projectRoutes(db: Knex): Router {
     validated({ params: projectParams }, async ({ params }, req, res) => {
       await authoriseProject(db, currentUser(req), params.projectId, 'read');
       res.json(await listFigures(db, params.projectId));
+    }),
+  );
+
+  r.put(
+    '/:projectId/figures/order',
+    validated({ params: projectParams, body: figureOrderBody }, async ({ params, body }, req, res) => {
+      await authoriseProject(db, currentUser(req), params.projectId, 'edit');
+      await reorderFigures(db, params.projectId, body);
+      res.json(await listFigures(db, params.projectId));
+    }),
+  );
+
+  r.post(
+    '/:projectId/figures/bulk',
+    validated({ params: projectParams, body: bulkFigureBody }, async ({ params, body }, req, res) => {
+      const user = currentUser(req);
+      const role = await authoriseProject(db, user, params.projectId, 'edit');
+      res.json(await bulkFigureAction(db, user, role, params.projectId, body));
     }),
   );
 

@@ -61,6 +61,7 @@ export async function updateFigure(db: Knex, user: User, figureId: number, input
       throw conflict(
         'stale_revision',
         `this figure was saved as revision ${row.current_revision} since you loaded revision ${input.baseRevision}; load the newer revision or save on top of it`,
+        { currentRevision: row.current_revision },
       );
     }
     const current = (await findFigure(trx, figureId))!;

@@ -3,7 +3,7 @@
 import type { Knex } from 'knex';
 import { roleAllows, type ProjectAction, type ProjectRole } from '../../shared/api/roles';
 import type { User } from '../../shared/api/schemas';
-import { forbidden, notFound } from '../lib/app-error';
+import { conflict, forbidden, notFound } from '../lib/app-error';
 import { findRole } from '../repositories/projects';
 
 const refusal: Record<ProjectAction, string> = {
@@ -22,7 +22,15 @@ export async function authoriseProject(
   const role = await findRole(db, user.id, projectId);
   if (!role) throw notFound('project');
   if (!roleAllows(role, action)) throw forbidden(refusal[action]);
+  await refuseIfArchived(db, projectId, action);
   return role;
+}
+
+/** An archived project is read-only until an owner restores it (owners may still manage it). */
+async function refuseIfArchived(db: Knex, projectId: number, action: ProjectAction): Promise<void> {
+  if (action === 'read' || action === 'manage') return;
+  const row = await db('projects').where({ id: projectId }).first('archived_at');
+  if (row?.archived_at) throw conflict('project_archived', 'this project is archived; an owner must restore it before anything changes');
 }
 
 /** Finds the project a figure belongs to, then authorises as above (404 for figures of other projects). */
@@ -38,5 +46,6 @@ export async function authoriseFigure(
   const role = await findRole(db, user.id, projectId);
   if (!role) throw notFound('figure');
   if (!roleAllows(role, action)) throw forbidden(refusal[action]);
+  await refuseIfArchived(db, projectId, action);
   return { projectId, role };
 }

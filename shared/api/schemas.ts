@@ -88,7 +88,7 @@ export const figureNumberSchema = z
   .string()
   .trim()
   .max(20)
-  .regex(/^[0-9A-Za-z][0-9A-Za-z.-]*$/, 'use digits, letters, dots and dashes, e.g. 4.2a');
+  .regex(/^([0-9A-Za-z][0-9A-Za-z.-]*)?$/, 'use digits, letters, dots and dashes, e.g. 4.2a');
 
 export const figureSummarySchema = z.object({
   id: z.number(),
@@ -149,6 +149,90 @@ export const apiErrorSchema = z.object({
     code: z.string(),
     message: z.string(),
     fields: z.record(z.string(), z.string()).optional(),
+    details: z.record(z.string(), z.unknown()).optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof apiErrorSchema>;
+
+// ── Review ──────────────────────────────────────────────────────────────────
+export const commentSchema = z.object({
+  id: z.number(),
+  figureId: z.number(),
+  revision: z.number(),
+  parentId: z.number().nullable(),
+  authorName: z.string(),
+  body: z.string(),
+  createdAt: z.string(),
+});
+export type Comment = z.infer<typeof commentSchema>;
+export const createCommentBody = z.object({
+  body: z.string().trim().min(1, 'write something').max(4000),
+  parentId: z.number().int().positive().optional(),
+});
+
+export const reviewActions = ['submit', 'request_changes', 'approve'] as const;
+export const reviewActionBody = z
+  .object({ action: z.enum(reviewActions), note: z.string().trim().max(2000).default('') })
+  .refine((b) => b.action !== 'request_changes' || b.note.length > 0, {
+    path: ['note'],
+    message: 'say what should change',
+  });
+export const reviewEventSchema = z.object({
+  id: z.number(),
+  revision: z.number(),
+  actorName: z.string(),
+  fromStatus: figureStatusSchema,
+  toStatus: figureStatusSchema,
+  note: z.string(),
+  createdAt: z.string(),
+});
+export type ReviewEvent = z.infer<typeof reviewEventSchema>;
+
+// ── Figure list order and bulk actions ─────────────────────────────────────
+export const figureOrderBody = z.object({
+  figures: z
+    .array(z.object({ id: z.number().int().positive(), number: figureNumberSchema }))
+    .min(1)
+    .max(1000)
+    .refine((a) => new Set(a.map((f) => f.id)).size === a.length, 'each figure may appear once')
+    .refine(
+      (a) => {
+        const numbers = a.map((f) => f.number).filter(Boolean);
+        return new Set(numbers).size === numbers.length;
+      },
+      'figure numbers must be different',
+    ),
+});
+export const bulkFigureBody = z.object({
+  ids: z.array(z.number().int().positive()).min(1).max(500),
+  action: z.enum(['submit', 'delete']),
+});
+
+// ── Export runs ─────────────────────────────────────────────────────────────
+export const exportFormatSchema = z.enum(['png', 'tiff', 'pdf', 'svg']);
+export const MAX_EXPORT_FIGURES = 200;
+export const createExportBody = z.object({
+  selection: z.discriminatedUnion('mode', [
+    z.object({ mode: z.literal('all') }),
+    z.object({ mode: z.literal('approved') }),
+    z.object({ mode: z.literal('selected'), ids: z.array(z.number().int().positive()).min(1).max(MAX_EXPORT_FIGURES) }),
+  ]),
+  formats: z.array(exportFormatSchema).min(1).max(4).refine((f) => new Set(f).size === f.length, 'list each format once'),
+});
+export const exportRunStatuses = ['queued', 'running', 'succeeded', 'failed'] as const;
+export const exportRunSchema = z.object({
+  id: z.number(),
+  projectId: z.number(),
+  status: z.enum(exportRunStatuses),
+  startedBy: z.string(),
+  formats: z.array(exportFormatSchema),
+  selection: z.string(),
+  done: z.number(),
+  total: z.number(),
+  currentItem: z.string().nullable(),
+  errors: z.array(z.object({ figure: z.string(), message: z.string() })),
+  createdAt: z.string(),
+  finishedAt: z.string().nullable(),
+  bundle: z.object({ filename: z.string(), size: z.number(), sha256: z.string() }).nullable(),
+});
+export type ExportRun = z.infer<typeof exportRunSchema>;

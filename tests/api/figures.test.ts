@@ -194,3 +194,32 @@ describe('duplicate and delete', () => {
     expect((await admin.put(`/api/figures/${f.id}`, { baseRevision: 1, title: 'X' })).status).toBe(404);
   });
 });
+
+describe('archived projects', () => {
+  it('when a project is archived, then its figures can be read but not changed until it is restored', async () => {
+    const p = (await owner.post('/api/projects', { name: 'Archive me' })).body;
+    await owner.post(`/api/projects/${p.id}/members`, { email: demo.editor, role: 'editor' });
+    const f = (await editor.post(`/api/projects/${p.id}/figures`, { title: 'Kept', spec: spec2pz })).body;
+    await owner.patch(`/api/projects/${p.id}`, { archived: true });
+    const r = await editor.put(`/api/figures/${f.id}`, { baseRevision: 1, title: 'Changed' });
+    expect(r.status).toBe(409);
+    expect(r.body.error.code).toBe('project_archived');
+    expect((await editor.post(`/api/projects/${p.id}/figures`, { title: 'New', spec: spec2pz })).status).toBe(409);
+    expect((await editor.get(`/api/figures/${f.id}`)).body.title).toBe('Kept');
+    await owner.patch(`/api/projects/${p.id}`, { archived: false });
+    expect((await editor.put(`/api/figures/${f.id}`, { baseRevision: 1, title: 'Changed' })).status).toBe(200);
+  });
+
+  it('when a save is stale, then the 409 names the current revision in its details', async () => {
+    const f = await newFigure('Details');
+    await editor.put(`/api/figures/${f.id}`, { baseRevision: 1, title: 'One' });
+    const r = await owner.put(`/api/figures/${f.id}`, { baseRevision: 1, title: 'Two' });
+    expect(r.body.error.details).toEqual({ currentRevision: 2 });
+  });
+
+  it('when a figure is created with an empty number, then it is unnumbered', async () => {
+    const r = await editor.post(`/api/projects/${chapter4}/figures`, { number: '', title: 'Unnumbered', spec: spec2pz });
+    expect(r.status).toBe(201);
+    expect(r.body.number).toBe('');
+  });
+});

@@ -1,21 +1,29 @@
-// Starts the real Express application in-process on a free loopback port, against a given database.
+// Starts the real Express application in-process on a free loopback port, against a given database;
+// optionally with the export job queue and worker, and outgoing mail to a local SMTP fake.
 import type { AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
 import type { Knex } from 'knex';
 import { parseEnv } from '../../api/config/env';
 import { createDb } from '../../api/db/knex';
 import { createApp } from '../../api/app';
+import { startExportJobs, type ExportJobs } from '../../api/jobs/export-jobs';
+import { createMailer } from '../../api/mail/mailer';
+import { startMailFake, type MailFake } from '../../api/mail/mail-fake';
 
 export interface TestServer {
   baseUrl: string;
   db: Knex;
+  /** Present when started with { mail: true }. */
+  mail: MailFake | null;
   stop(): Promise<void>;
 }
 
 export async function startTestServer(
   databaseUrl: string,
   extraEnv: Record<string, string> = {},
+  options: { jobs?: boolean | 'enqueue-only'; mail?: boolean } = {},
 ): Promise<TestServer> {
+  const mail = options.mail ? await startMailFake() : null;
   const env = parseEnv({
     NODE_ENV: 'test',
     DATABASE_URL: databaseUrl,
@@ -23,10 +31,16 @@ export async function startTestServer(
     BCRYPT_COST: '4',
     LOGIN_RATE_LIMIT: '1000',
     PORT: '0',
+    PUBLIC_URL: 'http://lobewright.test',
+    ...(mail ? { SMTP_URL: mail.url } : {}),
     ...extraEnv,
   });
   const db = createDb(databaseUrl);
-  const { app, close } = createApp({ env, db });
+  const mailer = createMailer(env);
+  const jobs: ExportJobs | null = options.jobs
+    ? await startExportJobs({ db, env, mailer, work: options.jobs === true })
+    : null;
+  const { app, close } = createApp({ env, db, mailer, enqueueExport: jobs?.enqueue });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -34,10 +48,13 @@ export async function startTestServer(
   return {
     baseUrl: `http://127.0.0.1:${port}`,
     db,
+    mail,
     stop: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      await jobs?.stop();
       await close();
       await db.destroy();
+      await mail?.stop();
     },
   };
 }
