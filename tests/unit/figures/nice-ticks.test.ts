@@ -37,5 +37,8 @@ describe('nice ticks and number formatting', () => {
     expect(formatSignificant(211.6708, 3)).toBe('212');
     expect(formatSignificant(656.4696, 6)).toBe('656.470');
     expect(formatSignificant(9.996, 3)).toBe('10.0');
+    expect(formatSignificant(-115_046, 3)).toBe('\u22121.15 × 10⁵');
+    expect(formatSignificant(0.000012345, 3)).toBe('1.23 × 10⁻⁵');
+    expect(formatSignificant(99_999, 3)).toBe('1.00 × 10⁵');
   });
 });
