@@ -93,7 +93,7 @@ function drawNode(doc: PDFKit.PDFDocument, node: SceneNode, dpi: number): void {
       return;
     }
     case 'image': {
-      const png = encodePng(node.pixelWidth, node.pixelHeight, node.rgba, { dpi, level: 4 });
+      const png = encodePng(node.pixelWidth, node.pixelHeight, node.rgba, { dpi, level: 1 });
       doc.image(Buffer.from(png.buffer, png.byteOffset, png.byteLength), node.x, node.y, {
         width: node.width,
         height: node.height,

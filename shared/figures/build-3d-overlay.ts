@@ -35,6 +35,31 @@ export interface Overlay3d {
   facts: SceneFact[];
 }
 
+/**
+ * The page projection of an orthographic view from where it puts the nucleus and the ends of the
+ * three axes (each `axisLengthBohr` long), all in mm: p(x, y, z) = n + (x·e_x + y·e_y + z·e_z)/L,
+ * e_i = end_i − n. Exact for orthographic views; for perspective ones it is right at the nucleus
+ * and the axis ends and approximate elsewhere.
+ */
+export function linearProjection(
+  nucleus: readonly [number, number],
+  ends: {
+    x: readonly [number, number];
+    y: readonly [number, number];
+    z: readonly [number, number];
+  },
+  axisLengthBohr: number,
+): (point: Point3) => [number, number] {
+  const e = [ends.x, ends.y, ends.z].map(([u, v]) => [
+    (u - nucleus[0]) / axisLengthBohr,
+    (v - nucleus[1]) / axisLengthBohr,
+  ]);
+  return ([x, y, z]) => [
+    nucleus[0] + x * e[0][0] + y * e[1][0] + z * e[2][0],
+    nucleus[1] + x * e[0][1] + y * e[1][1] + z * e[2][1],
+  ];
+}
+
 const MARGIN_MM = 2;
 /** The scale bar aims at this fraction of the figure's width (common practice for micrographs). */
 const BAR_FRACTION = 0.2;

@@ -71,7 +71,7 @@ const pngCache = new WeakMap<Uint8Array, string>();
 export function imageDataUri(node: ImageNode, dpi?: number): string {
   let uri = pngCache.get(node.rgba);
   if (uri === undefined) {
-    uri = `data:image/png;base64,${base64(encodePng(node.pixelWidth, node.pixelHeight, node.rgba, { dpi, level: 4 }))}`;
+    uri = `data:image/png;base64,${base64(encodePng(node.pixelWidth, node.pixelHeight, node.rgba, { dpi, level: 1 }))}`;
     pngCache.set(node.rgba, uri);
   }
   return uri;

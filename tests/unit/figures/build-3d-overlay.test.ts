@@ -1,7 +1,11 @@
 // The 3D overlay places its labels with the renderer's projection: axis names just past the axis ends,
 // a scale bar whose printed length matches its drawn length, the orbital label typeset.
 import { describe, expect, it } from 'vitest';
-import { build3dOverlay, type OverlayProjection } from '../../../shared/figures/build-3d-overlay';
+import {
+  build3dOverlay,
+  linearProjection,
+  type OverlayProjection,
+} from '../../../shared/figures/build-3d-overlay';
 import { runsText, type PathNode } from '../../../shared/figures/scene';
 import { resolved, textsWithRole, nodesWithRole } from './figure-test-helpers';
 
@@ -41,7 +45,9 @@ describe('3D overlay', () => {
     if (a.op !== 'move' || b.op !== 'line') throw new Error('bar is a line');
     expect(b.x - a.x).toBeCloseTo(10, 9);
     expect(runsText(textsWithRole(nodes, 'scale-bar-label')[0].runs)).toBe('5 bohr');
-    expect(facts).toEqual([{ name: 'scale bar length', value: 5, unit: 'bohr', printed: '5 bohr' }]);
+    expect(facts).toEqual([
+      { name: 'scale bar length', value: 5, unit: 'bohr', printed: '5 bohr' },
+    ]);
   });
 
   it('when lengths are in Å, then the bar length is a round number of Å (CODATA 2022 a0 = 0.529 177 Å)', () => {
@@ -51,11 +57,26 @@ describe('3D overlay', () => {
   });
 
   it('when the raster already draws the bar, then only its label is added, centred above it', () => {
-    const { nodes } = build3dOverlay(spec('bohr'), { ...front, scaleBar: { from: [5, 78], to: [25, 78], lengthBohr: 10 } });
+    const { nodes } = build3dOverlay(spec('bohr'), {
+      ...front,
+      scaleBar: { from: [5, 78], to: [25, 78], lengthBohr: 10 },
+    });
     expect(nodesWithRole(nodes, 'scale-bar')).toHaveLength(0);
     const label = textsWithRole(nodes, 'scale-bar-label')[0];
     expect(runsText(label.runs)).toBe('10 bohr');
     expect(label.x).toBe(15);
-    expect(textsWithRole(nodes, 'orbital-label')[0].runs.map((r) => r.text).join('')).toBe('3dz²');
+    expect(
+      textsWithRole(nodes, 'orbital-label')[0]
+        .runs.map((r) => r.text)
+        .join(''),
+    ).toBe('3dz²');
+  });
+
+  it('when the renderer reports only the nucleus and axis ends, then the linear projection reproduces them', () => {
+    const project = linearProjection([40, 45], { x: [60, 50], y: [30, 52], z: [40, 20] }, 10);
+    expect(project([10, 0, 0])).toEqual([60, 50]);
+    expect(project([0, 10, 0])).toEqual([30, 52]);
+    expect(project([0, 0, 10])).toEqual([40, 20]);
+    expect(project([5, 5, 5])).toEqual([40 + 10 - 5 + 0, 45 + 2.5 + 3.5 - 12.5]);
   });
 });
