@@ -18,13 +18,14 @@ import { projectRoutes } from './routes/projects';
 import { reviewRoutes } from './routes/review';
 import { exportRoutes, projectExportRoutes } from './routes/exports';
 import { createMailer, type Mailer } from './mail/mailer';
+import type { Jobs } from './jobs/jobs';
 
 export interface AppDeps {
   env: Env;
   db: Knex;
   mailer?: Mailer;
-  /** Queues an export run; absent where no job queue runs (exports then answer 503). */
-  enqueueExport?: (runId: number) => Promise<string | null>;
+  /** The job queue; absent where none runs (exports then answer 503, re-renders are skipped). */
+  jobs?: Pick<Jobs, 'enqueueExport' | 'enqueueRerender'>;
 }
 
 export interface BuiltApp {
@@ -32,7 +33,7 @@ export interface BuiltApp {
   close(): Promise<void>;
 }
 
-export function createApp({ env, db, mailer = createMailer(env), enqueueExport }: AppDeps): BuiltApp {
+export function createApp({ env, db, mailer = createMailer(env), jobs }: AppDeps): BuiltApp {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -69,8 +70,8 @@ export function createApp({ env, db, mailer = createMailer(env), enqueueExport }
 
   app.use('/api/auth', authRoutes(db, env, p));
   app.use('/api/admin', adminRoutes(db));
-  app.use('/api/projects', projectRoutes(db));
-  app.use('/api/projects', projectExportRoutes(db, enqueueExport ?? null));
+  app.use('/api/projects', projectRoutes(db, jobs?.enqueueRerender ?? null));
+  app.use('/api/projects', projectExportRoutes(db, jobs?.enqueueExport ?? null));
   app.use('/api/exports', exportRoutes(db));
   app.use('/api/figures', figureRoutes(db));
   app.use('/api/figures', reviewRoutes(db, env, mailer));

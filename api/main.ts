@@ -3,7 +3,7 @@
 import { parseEnv } from './config/env';
 import { createDb } from './db/knex';
 import { createApp } from './app';
-import { startExportJobs } from './jobs/export-jobs';
+import { startJobs } from './jobs/jobs';
 import { createMailer } from './mail/mailer';
 import { closeRender3d } from './render/render-3d';
 import { demoSignIns } from '../db/demo-data';
@@ -11,8 +11,8 @@ import { demoSignIns } from '../db/demo-data';
 const env = parseEnv();
 const db = createDb(env.DATABASE_URL);
 const mailer = createMailer(env);
-const jobs = await startExportJobs({ db, env, mailer, work: env.EXPORT_WORKER === 'inline' });
-const { app, close } = createApp({ env, db, mailer, enqueueExport: jobs.enqueue });
+const jobs = await startJobs({ db, env, mailer, work: env.EXPORT_WORKER === 'inline' });
+const { app, close } = createApp({ env, db, mailer, jobs });
 
 const server = app.listen(env.PORT, env.HOST, () => {
   const url = `http://${env.HOST}:${env.PORT}`;

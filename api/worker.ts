@@ -2,13 +2,13 @@
 // the server (run the server with EXPORT_WORKER=off to leave all export runs to workers like this).
 import { parseEnv } from './config/env';
 import { createDb } from './db/knex';
-import { startExportJobs } from './jobs/export-jobs';
+import { startJobs } from './jobs/jobs';
 import { createMailer } from './mail/mailer';
 import { closeRender3d } from './render/render-3d';
 
 const env = parseEnv();
 const db = createDb(env.DATABASE_URL);
-const jobs = await startExportJobs({ db, env, mailer: createMailer(env), work: true });
+const jobs = await startJobs({ db, env, mailer: createMailer(env), work: true });
 console.log('[lobewright] export worker waiting for runs');
 
 async function shutdown(): Promise<void> {

@@ -12,11 +12,9 @@ import { build3dOverlayNodes } from './overlay-3d';
 import { sceneToPdf } from './scene-to-pdf';
 import { sceneToPng } from './scene-to-png';
 
-export const renderFormats = ['png', 'tiff', 'pdf', 'svg'] as const;
-export type RenderFormat = (typeof renderFormats)[number];
+import { RENDERER_VERSION, renderFormats, type RenderFormat } from './render-key';
 
-/** Bumped whenever a change to the renderers changes output bytes (part of every cache key). */
-export const RENDERER_VERSION = 'lobewright-render-1';
+export { RENDERER_VERSION, renderFormats, type RenderFormat };
 
 export interface RenderOptions {
   /** TIFF only: convert to CMYK with libvips' default profile (colours shift; see notes). */

@@ -1,7 +1,10 @@
 // Figures and their immutable revisions.
 import type { Knex } from 'knex';
 import type { Figure, FigureSummary, Revision, RevisionSummary } from '../../shared/api/schemas';
+import { parseHouseStyle } from '../../shared/spec/house-style';
 import { migrateFigureSpec } from '../../shared/spec/migrate-figure-spec';
+import { resolveFigureSpec } from '../../shared/spec/resolve-figure-spec';
+import { renderKey } from '../render/render-key';
 
 export interface FigureRow {
   id: string;
@@ -20,6 +23,7 @@ export interface FigureRow {
 interface JoinedRow extends FigureRow {
   spec: unknown;
   author_name: string;
+  house_style: unknown;
 }
 
 function withCurrentRevision(db: Knex) {
@@ -28,11 +32,12 @@ function withCurrentRevision(db: Knex) {
       this.on('r.figure_id', 'f.id').andOn('r.revision', 'f.current_revision');
     })
     .join('users as u', 'u.id', 'r.author_id')
+    .join('projects as p', 'p.id', 'f.project_id')
     .whereNull('f.deleted_at')
-    .select('f.*', 'r.spec', 'u.name as author_name');
+    .select('f.*', 'r.spec', 'u.name as author_name', 'p.house_style');
 }
 
-function toSummary(r: JoinedRow): FigureSummary {
+function toSummary(r: JoinedRow, printFilesCurrent: boolean): FigureSummary {
   const kind = (r.spec as { kind?: { type?: string } })?.kind?.type ?? 'unknown';
   return {
     id: Number(r.id),
@@ -47,19 +52,34 @@ function toSummary(r: JoinedRow): FigureSummary {
     approvedRevision: r.approved_revision,
     updatedAt: r.updated_at.toISOString(),
     updatedBy: r.author_name,
+    printFilesCurrent,
   };
+}
+
+/** The render-cache keys of every print format a figure's current spec asks for. */
+function printKeys(r: JoinedRow): string[] {
+  const spec = resolveFigureSpec(migrateFigureSpec(r.spec), parseHouseStyle(r.house_style));
+  return spec.print.formats.map((format) => renderKey(spec, format, false));
+}
+
+async function withRenderState(db: Knex, rows: JoinedRow[]): Promise<FigureSummary[]> {
+  const keys = rows.map(printKeys);
+  const cached = new Set<string>(await db('render_cache').whereIn('key', keys.flat()).pluck('key'));
+  return rows.map((r, i) => toSummary(r, keys[i].every((k) => cached.has(k))));
 }
 
 export async function listFigures(db: Knex, projectId: number): Promise<FigureSummary[]> {
   const rows: JoinedRow[] = await withCurrentRevision(db)
     .where('f.project_id', projectId)
     .orderBy([{ column: 'f.position' }, { column: 'f.id' }]);
-  return rows.map(toSummary);
+  return withRenderState(db, rows);
 }
 
 export async function findFigure(db: Knex, figureId: number): Promise<Figure | undefined> {
   const row: JoinedRow | undefined = await withCurrentRevision(db).where('f.id', figureId).first();
-  return row && { ...toSummary(row), spec: migrateFigureSpec(row.spec) };
+  if (!row) return undefined;
+  const [summary] = await withRenderState(db, [row]);
+  return { ...summary, spec: migrateFigureSpec(row.spec) };
 }
 
 /** Locks the figure row for the rest of the transaction (serialises concurrent saves). */

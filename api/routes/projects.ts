@@ -34,7 +34,7 @@ import { authoriseProject } from '../services/project-access';
 const projectParams = z.object({ projectId: idParam });
 const memberParams = z.object({ projectId: idParam, userId: idParam });
 
-export function projectRoutes(db: Knex): Router {
+export function projectRoutes(db: Knex, enqueueRerender: ((projectId: number) => Promise<string | null>) | null): Router {
   const r = Router();
   r.use(requireUser);
 
@@ -90,6 +90,8 @@ export function projectRoutes(db: Knex): Router {
       await db('projects')
         .where({ id: params.projectId })
         .update({ house_style: JSON.stringify(body), updated_at: db.fn.now() });
+      // Figures that follow the house style now print differently: render them again in the background.
+      await enqueueRerender?.(params.projectId);
       res.json(parseHouseStyle(body));
     }),
   );

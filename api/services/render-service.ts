@@ -1,13 +1,12 @@
 // Renders a stored figure revision to a print file, resolving the project's house style, with
 // limits checked first and results kept in PostgreSQL by content hash (spec, format, renderer).
-import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
-import { canonicalJson } from '../../shared/spec/canonical-json';
 import { parseHouseStyle } from '../../shared/spec/house-style';
 import { migrateFigureSpec } from '../../shared/spec/migrate-figure-spec';
 import { resolveFigureSpec, type ResolvedFigureSpec } from '../../shared/spec/resolve-figure-spec';
 import { AppError, notFound } from '../lib/app-error';
-import { RENDERER_VERSION, renderFigure, is3dKind, type RenderFormat } from '../render/render-figure';
+import { renderFigure, is3dKind, type RenderFormat } from '../render/render-figure';
+import { renderKey } from '../render/render-key';
 
 /** Largest side in pixels of any rendered raster (500 mm at 600 dpi); 3D is limited further by the browser. */
 export const MAX_RASTER_SIDE_PX = 12_000;
@@ -62,11 +61,6 @@ export function checkRenderLimits(spec: ResolvedFigureSpec, format: RenderFormat
   }
 }
 
-export function renderKey(spec: ResolvedFigureSpec, format: RenderFormat, cmyk: boolean): string {
-  return createHash('sha256')
-    .update(canonicalJson({ spec, format, cmyk, renderer: RENDERER_VERSION }))
-    .digest('hex');
-}
 
 export async function renderResolvedSpec(
   db: Knex,

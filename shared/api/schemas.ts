@@ -103,6 +103,8 @@ export const figureSummarySchema = z.object({
   approvedRevision: z.number().nullable(),
   updatedAt: z.string(),
   updatedBy: z.string(),
+  /** True when every print format of the figure is rendered from its current spec and house style. */
+  printFilesCurrent: z.boolean(),
 });
 export type FigureSummary = z.infer<typeof figureSummarySchema>;
 

@@ -150,3 +150,33 @@ describe('house style', () => {
     expect(await server.db('projects').where({ id: chapter4 }).first('house_style')).toEqual(before);
   });
 });
+
+describe('print files after a house-style change', () => {
+  it('when the owner changes the house style, then figures show as not current until the re-render job has run', async () => {
+    const { startTestServer: start } = await import('../support/test-server');
+    const withJobs = await start(inject('databaseUrl'), {}, { jobs: true });
+    try {
+      const { signedIn: signIn, demo: d } = await import('../support/api-client');
+      const o = await signIn(withJobs.baseUrl, d.owner);
+      const p = (await o.post('/api/projects', { name: 'Restyle' })).body;
+      await o.post(`/api/projects/${p.id}/figures`, {
+        number: '1',
+        title: 'Levels',
+        spec: { schemaVersion: 1, state: { terms: [{ n: 1, l: 0, m: 0 }] }, kind: { type: 'levels' } },
+      });
+      expect((await o.get(`/api/projects/${p.id}/figures`)).body[0].printFilesCurrent).toBe(false);
+      await o.put(`/api/projects/${p.id}/house-style`, { print: { dpi: 150, formats: ['svg', 'pdf'] } });
+      let current = false;
+      for (let i = 0; i < 100 && !current; i++) {
+        await new Promise((r) => setTimeout(r, 100));
+        current = (await o.get(`/api/projects/${p.id}/figures`)).body[0].printFilesCurrent;
+      }
+      expect(current).toBe(true);
+      await o.put(`/api/projects/${p.id}/house-style`, { print: { dpi: 300, formats: ['svg', 'pdf'] }, look: { fontSizePt: 9 } });
+      // Right after the change nothing is rendered for the new style yet.
+      expect((await o.get(`/api/projects/${p.id}/figures`)).body[0].printFilesCurrent).toBe(false);
+    } finally {
+      await withJobs.stop();
+    }
+  });
+});

@@ -6,7 +6,7 @@ import type { Knex } from 'knex';
 import { parseEnv } from '../../api/config/env';
 import { createDb } from '../../api/db/knex';
 import { createApp } from '../../api/app';
-import { startExportJobs, type ExportJobs } from '../../api/jobs/export-jobs';
+import { startJobs, type Jobs } from '../../api/jobs/jobs';
 import { createMailer } from '../../api/mail/mailer';
 import { startMailFake, type MailFake } from '../../api/mail/mail-fake';
 
@@ -37,10 +37,10 @@ export async function startTestServer(
   });
   const db = createDb(databaseUrl);
   const mailer = createMailer(env);
-  const jobs: ExportJobs | null = options.jobs
-    ? await startExportJobs({ db, env, mailer, work: options.jobs === true })
+  const jobs: Jobs | null = options.jobs
+    ? await startJobs({ db, env, mailer, work: options.jobs === true })
     : null;
-  const { app, close } = createApp({ env, db, mailer, enqueueExport: jobs?.enqueue });
+  const { app, close } = createApp({ env, db, mailer, jobs: jobs ?? undefined });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });

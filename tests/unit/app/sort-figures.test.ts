@@ -18,6 +18,7 @@ function figure(number: string, extra: Partial<FigureSummary> = {}): FigureSumma
     approvedRevision: null,
     updatedAt: '2026-01-01T00:00:00.000Z',
     updatedBy: 'Ada Okafor',
+    printFilesCurrent: false,
     ...extra,
   };
 }
