@@ -8,6 +8,7 @@
  * Every count narrows the brackets of all levels at once, and a Newton step that leaves its
  * bracket is replaced by bisection, so the search cannot lose or swap a level.
  */
+import { OrbitalInputError } from '../physics/orbital-input-error';
 import {
   energyCorrection,
   matchedState,
@@ -72,6 +73,8 @@ export function findLevel(
   // The bracket has shrunk to round-off without a clean Newton finish: take its middle.
   E = 0.5 * (b.lo[k] + b.hi[k]);
   sweepOutward(s, E);
-  energyCorrection(s, E);
+  if (!Number.isFinite(energyCorrection(s, E))) {
+    throw new OrbitalInputError('levels', `level with ${k} radial nodes could not be matched near E = ${E.toPrecision(6)} hartree`);
+  }
   return { energy: E, ...matchedState(s) };
 }
