@@ -41,6 +41,15 @@ describe('hydrogen-like Coulomb potential (E_n = −Z²/(2n²), REFERENCE.md §2
       expectLevel(level, -4.5 / level.n ** 2, { abs: 1e-9 }, { Z: 3, n: level.n, l: 1 });
   });
 
+  it('when the reduced mass of ¹H is used, then E_n = −μ/(2n²) and ⟨r⟩ scales by 1/μ', () => {
+    const mu = 0.9994556794247615; // μ/m_e of ¹H, CODATA 2022 (REFERENCE.md §1)
+    const sol = solveRadial({ potential: buildPotential({ type: 'coulomb', Z: 1 }), l: 1, levels: 2, muRatio: mu });
+    for (const level of sol.levels) {
+      expectLevel(level, -mu / (2 * level.n ** 2), { abs: 1e-10 }, { mu, n: level.n });
+      expectClose(level.rMean, (3 * level.n ** 2 - 2) / (2 * mu), { rel: 1e-8 }, { mu, n: level.n });
+    }
+  });
+
   it('when the radial functions are compared with shared/physics radialFunction, then they agree within 1e-8 of max |R|', () => {
     for (const [l, count] of [[0, 3], [1, 3], [2, 2]]) {
       const sol = solveRadial({ potential: buildPotential({ type: 'coulomb', Z: 1 }), l, levels: count });
@@ -66,6 +75,11 @@ describe('3-D isotropic harmonic oscillator (E = (2n_r + l + 3/2)ω, REFERENCE.m
         expectLevel(level, 2 * (level.n - l - 1) + l + 1.5, { rel: 1e-9 }, { omega: 1, n: level.n, l });
   });
 
+  it('when ω = 1, then the ground state has ⟨r⟩ = 2/√π (Gaussian u ∝ r e^{−r²/2}, textbook integral)', () => {
+    const [level] = solve({ type: 'harmonic-oscillator', omega: 1 }, 0, 1);
+    expectClose(level.rMean, 2 / Math.sqrt(Math.PI), { rel: 1e-9 });
+  });
+
   it('when ω = 2.5, then E scales with ω', () => {
     const [level] = solve({ type: 'harmonic-oscillator', omega: 2.5 }, 2, 1);
     expectLevel(level, 2.5 * 3.5, { rel: 1e-9 }, { omega: 2.5, l: 2 });
@@ -82,6 +96,13 @@ describe('infinite spherical well (E = x_{l,k}²/(2R²), zeros of j_l: A&S Table
     for (let l = 0; l <= 2; l++)
       for (const level of solve({ type: 'infinite-well', radius: 1 }, l, 3))
         expectLevel(level, zeros[l][level.nodes] ** 2 / 2, { rel: 1e-9 }, { R: 1, n: level.n, l });
+  });
+
+  it('when R = 1 bohr, then the s ground state u = √2 sin(πr) has ⟨r⟩ = 1/2 and the right shape', () => {
+    const sol = solveRadial({ potential: buildPotential({ type: 'infinite-well', radius: 1 }), l: 0, levels: 1 });
+    expectClose(sol.levels[0].rMean, 0.5, { rel: 1e-9 });
+    for (let i = 0; i < sol.r.length; i += 13)
+      expectClose(sol.levels[0].u[i], Math.SQRT2 * Math.sin(Math.PI * sol.r[i]), { abs: 1e-8 }, { r: sol.r[i] });
   });
 
   it('when R = 2 bohr, then E scales as 1/R² and u vanishes at the wall', () => {
