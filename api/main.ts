@@ -23,7 +23,11 @@ const server = app.listen(env.PORT, env.HOST, () => {
   console.log('\nPress Ctrl-C to stop.');
 });
 
+let stopping = false;
 async function shutdown(): Promise<void> {
+  // Ctrl-C reaches this process both directly and through scripts/start's trap: stop once.
+  if (stopping) return;
+  stopping = true;
   server.close();
   await jobs.stop();
   await closeRender3d();

@@ -11,7 +11,11 @@ const db = createDb(env.DATABASE_URL);
 const jobs = await startJobs({ db, env, mailer: createMailer(env), work: true });
 console.log('[lobewright] export worker waiting for runs');
 
+let stopping = false;
 async function shutdown(): Promise<void> {
+  // Ctrl-C reaches this process both directly and through scripts/start's trap: stop once.
+  if (stopping) return;
+  stopping = true;
   await jobs.stop();
   await closeRender3d();
   await db.destroy();
