@@ -6,7 +6,8 @@
 import { z } from 'zod';
 import { MAX_ANGULAR_MOMENTUM } from '../../../shared/physics/quantum-numbers';
 import { buildPotential } from '../../../shared/solver/potentials/build-potential';
-import { MAX_LEVELS, solveRadial } from '../../../shared/solver/solve-radial';
+import { MAX_LEVELS, solveRadial, type RadialSolution } from '../../../shared/solver/solve-radial';
+import { solveRadialSeries } from '../../../shared/solver/solve-radial-series';
 import { CliError, type CliCommand } from '../cli-error';
 import { parseRequest, withPhysicsErrors } from './physics-request';
 
@@ -35,12 +36,10 @@ const solve: CliCommand = (input) => {
     () => buildPotential(spec),
     (field) => (csvAtTop && field === 'potential.csv' ? 'csv' : field),
   );
-  const ls = Array.isArray(req.l) ? req.l : [req.l];
-  const solutions = ls.map((l, i) =>
-    withPhysicsErrors(
-      () => solveRadial({ potential, l, levels: req.levels, muRatio: req.muRatio, step: req.step }),
-      (field) => (field === 'l' && Array.isArray(req.l) ? `l[${i}]` : field),
-    ),
+  const options = { potential, levels: req.levels, muRatio: req.muRatio, step: req.step };
+  const l = req.l;
+  const solutions: RadialSolution[] = withPhysicsErrors(() =>
+    Array.isArray(l) ? solveRadialSeries({ ...options, l }) : [solveRadial({ ...options, l })],
   );
   return {
     potential: { id: potential.id, label: potential.label, formula: potential.formula },

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { OrbitalInputError } from '../../../shared/physics/orbital-input-error';
 import { buildPotential } from '../../../shared/solver/potentials/build-potential';
 import { MAX_LEVELS, solveRadial } from '../../../shared/solver/solve-radial';
+import { solveRadialSeries } from '../../../shared/solver/solve-radial-series';
 
 function fieldOf(run: () => unknown): string {
   try {
@@ -68,5 +69,21 @@ describe('solve requests', () => {
   it('when thirty Coulomb s levels are asked, then they are all found (the grid grows to fit them)', () => {
     const sol = solveRadial({ potential: coulomb, l: 0, levels: MAX_LEVELS });
     expect(sol.levels[MAX_LEVELS - 1].energy).toBeCloseTo(-0.5 / 900, 9);
+  });
+});
+
+describe('solveRadialSeries', () => {
+  const hulthen = buildPotential({ type: 'hulthen', Z: 1, delta: 0.1 });
+
+  it('when several l are asked, then one solution per l comes back in order (Hulthén 1s, 2s exact: REFERENCE.md §10.4)', () => {
+    const series = solveRadialSeries({ potential: hulthen, l: [1, 0], levels: 2 });
+    expect(series.map((s) => s.l)).toEqual([1, 0]);
+    expect(series[1].levels[1].energy).toBeCloseTo(-0.08, 10);
+  });
+
+  it('when an l is repeated, unbound or the list is empty, then the position is named', () => {
+    expect(fieldOf(() => solveRadialSeries({ potential: hulthen, l: [0, 0], levels: 1 }))).toBe('l[1]');
+    expect(fieldOf(() => solveRadialSeries({ potential: hulthen, l: [0, 9], levels: 1 }))).toBe('l[1]');
+    expect(fieldOf(() => solveRadialSeries({ potential: hulthen, l: [], levels: 1 }))).toBe('l');
   });
 });
