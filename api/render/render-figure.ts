@@ -115,13 +115,14 @@ async function render3d(
     rgba: new Uint8Array(data.buffer, data.byteOffset, data.byteLength),
     role: '3d-raster',
   };
+  const overlay = build3dOverlayNodes(spec, r.projection);
   const scene: FigureScene = {
     widthMm: spec.print.widthMm,
     heightMm: spec.print.heightMm,
     background: spec.print.background,
     dpi: spec.print.dpi,
-    children: [image, ...build3dOverlayNodes(spec, r.projection)],
-    metadata: { title: '', altText: '', facts: [], notes: [...r.notes] },
+    children: [image, ...overlay.nodes],
+    metadata: { title: '', altText: '', facts: overlay.facts, notes: [...r.notes] },
   };
   // The raster itself gets the dpi in its metadata; the overlay's labels are drawn into it too,
   // so PNG and PDF show the same figure.
