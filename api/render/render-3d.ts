@@ -22,7 +22,8 @@ import type { PrintJob } from '../../app/print-3d';
 
 /** Debian's Chromium; LOBEWRIGHT_CHROMIUM points elsewhere (the same switch as the browser tests). */
 export const CHROMIUM_PATH = process.env.LOBEWRIGHT_CHROMIUM ?? '/usr/bin/chromium';
-const CHROMIUM_ARGS = [
+/** Headless Chromium switches: no GPU (SwiftShader WebGL), and no network beyond the page under test. */
+export const CHROMIUM_ARGS = [
   '--no-sandbox',
   '--disable-gpu',
   '--disable-background-networking',

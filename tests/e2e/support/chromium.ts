@@ -3,6 +3,7 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { CHROMIUM_ARGS } from '../../../api/render/render-3d';
 
 export const CHROMIUM_PATH = process.env.LOBEWRIGHT_CHROMIUM ?? '/usr/bin/chromium';
 
@@ -10,15 +11,7 @@ export function launchChromium(): Promise<Browser> {
   return chromium.launch({
     executablePath: CHROMIUM_PATH,
     headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--disable-quic',
-    ],
+    args: CHROMIUM_ARGS,
   });
 }
 

@@ -15,7 +15,7 @@ import { buildAngularSurface } from './angular-surface';
 import { buildNodalSheets } from './nodal-sheets';
 import { physicsTriplesToThree, type MeshArrays } from './mesh-arrays';
 import type { OrbitalFacts, OrbitalGeometry, SurfaceSet } from './orbital-geometry';
-import { stateFromSpec } from './state-from-spec';
+import { orbitalStateOf } from '../../../../shared/figures/figure-system';
 
 export type GeometrySpec = Pick<ResolvedFigureSpec, 'system' | 'state' | 'kind' | 'look'>;
 export type ProgressReport = (fraction: number, stage: string) => void;
@@ -48,7 +48,7 @@ export function buildOrbitalGeometry(
     );
   }
   onProgress(0, 'compiling the state');
-  const state = compileState(stateFromSpec(spec));
+  const state = compileState(orbitalStateOf(spec));
   const single = singleOrbital(state);
   const notes: string[] = [];
   const base = {
