@@ -8,6 +8,12 @@
  *   sp³: ½(s + p_x + p_y + p_z), ½(s + p_x − p_y − p_z), ½(s − p_x + p_y − p_z), ½(s − p_x − p_y + p_z),
  *        pointing to alternate corners of a cube (tetrahedral).
  * All use the real basis of REFERENCE.md §5 (p_x = m +1, p_y = m −1, p_z = m 0) with shell n ≥ 2.
+ *
+ * Sign of s: the textbook sets assume s and p radial parts of the same sign where the hybrid's lobe
+ * is. Lobewright's R_nl is positive at the nucleus (REFERENCE.md §4), so at large r, where most of
+ * the probability is, R_ns has the sign (−1)^(n−1) and R_np the sign (−1)^(n−2): opposite, for
+ * every n. The s coefficient is therefore negated, so that each hybrid's large lobe points along
+ * the direction its p part names (sp: +z and −z; sp³: the cube diagonals as listed).
  */
 import type { OrbitalTerm } from './orbital-state';
 import { OrbitalInputError } from './orbital-input-error';
@@ -21,7 +27,7 @@ function build(n: number, sets: Coefficients[]): OrbitalTerm[][] {
   return sets.map(([s, px, py, pz]) =>
     (
       [
-        [0, 0, s],
+        [0, 0, -s],
         [1, 1, px],
         [1, -1, py],
         [1, 0, pz],

@@ -332,6 +332,7 @@ describe('hybrid orbitals (Pauling 1931, from memory)', () => {
       const vectors = set.map((terms) => {
         const v = [0, 0, 0, 0];
         for (const t of terms) v[t.l === 0 ? 0 : t.m === 1 ? 1 : t.m === -1 ? 2 : 3] = t.weight!.re;
+        expect(v[0]).toBeLessThan(0); // s negated: see the header of hybrid-orbitals.ts
         return v;
       });
       for (let a = 0; a < vectors.length; a++) {
@@ -343,13 +344,19 @@ describe('hybrid orbitals (Pauling 1931, from memory)', () => {
     }
   });
 
-  it('when the first sp³ hybrid is evaluated, then it is largest along (1,1,1) among the cube diagonals', () => {
+  it('when the first sp³ hybrid is evaluated, then its large lobe points along (1,1,1) among the cube diagonals', () => {
     const c = compileState({ Z: 1, terms: sp3Hybrids(2)[0] });
     const at = (x: number, y: number, z: number): number =>
       evaluatePsi(c, x, y, z, { re: 0, im: 0 }).re;
-    const d = 1 / Math.sqrt(3); // r = 1 bohr, inside the 2s node at r = 2 where R_20 > 0
+    // r = 5 bohr, beyond the 2s node at r = 2 bohr (REFERENCE.md §8), where most of the probability is
+    const d = 5 / Math.sqrt(3);
     expect(at(d, d, d)).toBeGreaterThan(Math.abs(at(d, -d, -d)));
     expect(at(d, d, d)).toBeGreaterThan(Math.abs(at(-d, -d, -d)));
+    // the same holds for the sp pair along ±z, and in the n = 3 shell
+    const sp = spHybrids(3).map((terms) => compileState({ Z: 1, terms }));
+    const z = (s: typeof sp[number], zz: number) => Math.abs(evaluatePsi(s, 0, 0, zz, { re: 0, im: 0 }).re);
+    expect(z(sp[0], 12)).toBeGreaterThan(z(sp[0], -12));
+    expect(z(sp[1], -12)).toBeGreaterThan(z(sp[1], 12));
     expect(() => spHybrids(1)).toThrow(OrbitalInputError);
   });
 });
