@@ -23,8 +23,8 @@ import { OrbitalInputError } from '../physics/orbital-input-error';
 import { checkMassRatio, MAX_ANGULAR_MOMENTUM } from '../physics/quantum-numbers';
 import { hartreeToEv } from '../physics/units';
 import { countBoundLevels } from './count-bound-levels';
-import { countLevelsBelow, findLevel, levelBrackets, type GridLevel, type LevelBrackets } from './find-levels';
-import type { ShootingSystem } from './numerov-shooting';
+import { countLevelsBelow, findLevel, levelBrackets, type LevelBrackets } from './find-levels';
+import { matchedState, type GridState, type ShootingSystem } from './numerov-shooting';
 import type { Potential } from './potential';
 import { gridPoints, radialSystem } from './radial-system';
 
@@ -124,7 +124,8 @@ function initialOuterRadius(p: Potential, l: number, levels: number, mu: number)
   const L = p.lengthScale;
   if (p.asymptotes.tailCharge > 0) {
     const n = levels + l;
-    return (2 * n * n + 20 * n) / (mu * p.asymptotes.tailCharge);
+    // Outer turning point 2n²/Z plus 30 decay lengths n/Z of the highest level.
+    return (2 * n * n + 30 * n) / (mu * p.asymptotes.tailCharge);
   }
   if (!Number.isFinite(p.asymptotes.threshold)) return L * (Math.sqrt(4 * (levels + l) + 3) + 8);
   return Math.max(p.rangeEnd ?? 0, 40 * L);
@@ -163,10 +164,17 @@ function gridQuality(s: ShootingSystem, E: number): { decay: number; phase: numb
   return { decay, phase, allowedToEnd: vEff[n - 1] <= E };
 }
 
-function solveOnGrid(s: ShootingSystem, b: LevelBrackets, levels: number, guesses?: number[]): GridLevel[] {
-  const out: GridLevel[] = [];
+function energiesOnGrid(s: ShootingSystem, b: LevelBrackets, levels: number, guesses: number[] | null): number[] {
+  const out: number[] = [];
   for (let k = 0; k < levels; k++) out.push(findLevel(s, k, b, guesses?.[k]));
   return out;
+}
+
+function statesOnGrid(s: ShootingSystem, b: LevelBrackets, guesses: number[]): (GridState & { energy: number })[] {
+  return guesses.map((guess, k) => {
+    const energy = findLevel(s, k, b, guess);
+    return { energy, ...matchedState(s) };
+  });
 }
 
 export function solveRadial(request: SolveRadialRequest): RadialSolution {
@@ -183,7 +191,9 @@ export function solveRadial(request: SolveRadialRequest): RadialSolution {
 
   const fixedEnd = p.hardWall ?? p.outerLimit;
   let rEnd = initialOuterRadius(p, l, levels, mu);
-  let coarse: GridLevel[] | null = null;
+  let coarse: number[] | null = null;
+  // Energies of the previous attempt start the next one: extending or refining moves them little.
+  let previous: number[] | null = null;
   let brackets: LevelBrackets | number = 0;
   let system: ShootingSystem | null = null;
   for (let attempt = 0; attempt < MAX_ADJUSTMENTS && !coarse; attempt++) {
@@ -195,8 +205,9 @@ export function solveRadial(request: SolveRadialRequest): RadialSolution {
       rEnd *= 2;
       continue;
     }
-    const found = solveOnGrid(system, brackets, levels);
-    const top = found[levels - 1].energy;
+    const found = energiesOnGrid(system, brackets, levels, previous);
+    previous = found;
+    const top = found[levels - 1];
     const q = gridQuality(system, top);
     if (q.phase > MAX_PHASE_PER_STEP) {
       step *= (0.8 * MAX_PHASE_PER_STEP) / q.phase;
@@ -227,7 +238,7 @@ export function solveRadial(request: SolveRadialRequest): RadialSolution {
   const upperHint = brackets.hi[levels - 1];
   const fineBrackets = bracketLevels(fine, p, levels, Number.isFinite(upperHint) ? upperHint : undefined);
   if (typeof fineBrackets === 'number') refuseUnbound(fineBrackets, levels, l, '');
-  const fineLevels = solveOnGrid(fine, fineBrackets, levels, coarse.map((c) => c.energy));
+  const fineLevels = statesOnGrid(fine, fineBrackets, coarse);
 
   const order = p.smooth ? 4 : 2;
   const denominator = 2 ** order - 1;
@@ -236,7 +247,7 @@ export function solveRadial(request: SolveRadialRequest): RadialSolution {
   const r = fine.r;
   const solved = fineLevels.map((f, k): SolvedLevel => {
     const n = k + l + 1;
-    const diff = f.energy - coarse[k].energy;
+    const diff = f.energy - coarse[k];
     const energy = f.energy + diff / denominator;
     const R = new Float64Array(r.length);
     for (let i = 0; i < r.length; i++) R[i] = f.u[i] / r[i];
@@ -248,7 +259,7 @@ export function solveRadial(request: SolveRadialRequest): RadialSolution {
       energyEv: hartreeToEv(energy),
       error: Math.abs(diff) / denominator,
       energyFine: f.energy,
-      energyCoarse: coarse[k].energy,
+      energyCoarse: coarse[k],
       rMean: f.rMean,
       u: f.u,
       R,
