@@ -1,20 +1,29 @@
-// /projects/:projectId: the project's figures, and (for editors) a way to add one.
-import { useQueryClient } from '@tanstack/react-query';
+// /projects/:projectId: the project's figures, and (for editors) a way to add one. While some
+// figures' print files are out of date (e.g. after a house-style change the server re-renders them in
+// the background) the list is fetched again every few seconds.
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import { roleAllows } from '../../shared/api/roles';
 import { Button } from '../components/ui/button';
 import { Dialog } from '../components/ui/dialog';
 import { ErrorPanel, Loading } from '../components/ui/status';
-import { useFigures } from '../features/figures/api/get-figures';
+import { getFiguresQueryOptions } from '../features/figures/api/get-figures';
 import { CreateFigureForm } from '../features/figures/components/create-figure-form';
 import { FigureTable } from '../features/figures/components/figure-table';
 import { projectsQueryKey } from '../features/projects/api/get-projects';
 import { useProjectFromLayout } from './project-layout';
 
+const OUT_OF_DATE_POLL_MS = 4000;
+
 export function ProjectFiguresRoute() {
   const project = useProjectFromLayout();
-  const figures = useFigures(project.id);
+  const figures = useQuery({
+    ...getFiguresQueryOptions(project.id),
+    refetchInterval: (query) =>
+      query.state.data?.some((f) => !f.printFilesCurrent) ? OUT_OF_DATE_POLL_MS : false,
+  });
+  const outOfDate = figures.data?.filter((f) => !f.printFilesCurrent).length ?? 0;
   const [creating, setCreating] = useState(false);
   const navigate = useNavigate();
   const queryClient = useQueryClient();
@@ -37,7 +46,24 @@ export function ProjectFiguresRoute() {
       ) : figures.isError ? (
         <ErrorPanel error={figures.error} onRetry={() => void figures.refetch()} />
       ) : (
-        <FigureTable figures={figures.data} />
+        <>
+          {outOfDate > 0 && (
+            <p className="text-sm text-stone-600">
+              Print files of {outOfDate} {outOfDate === 1 ? 'figure are' : 'figures are'} out of
+              date (not yet rendered for the current spec and house style); this list checks again
+              every few seconds.
+            </p>
+          )}
+          <FigureTable
+            projectId={project.id}
+            figures={figures.data}
+            canEdit={canEdit}
+            onExportSelected={(ids) =>
+              void navigate(`/projects/${project.id}/exports?figures=${ids.join(',')}`)
+            }
+            onDeleted={() => void queryClient.invalidateQueries({ queryKey: projectsQueryKey })}
+          />
+        </>
       )}
       <Dialog
         open={creating}
