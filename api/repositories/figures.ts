@@ -5,6 +5,7 @@ import { parseHouseStyle } from '../../shared/spec/house-style';
 import { migrateFigureSpec } from '../../shared/spec/migrate-figure-spec';
 import { resolveFigureSpec } from '../../shared/spec/resolve-figure-spec';
 import { renderKey } from '../render/render-key';
+import { changedPaths } from '../../shared/spec/changed-paths';
 
 export interface FigureRow {
   id: string;
@@ -89,33 +90,52 @@ export function lockFigure(trx: Knex.Transaction, figureId: number): Promise<Fig
   >;
 }
 
-export async function listRevisions(db: Knex, figureId: number): Promise<RevisionSummary[]> {
-  const rows = await db('figure_revisions as r')
-    .join('users as u', 'u.id', 'r.author_id')
-    .where('r.figure_id', figureId)
-    .orderBy('r.revision', 'desc')
-    .select('r.revision', 'r.created_at', 'r.message', 'r.spec_hash', 'u.name as author_name');
-  return rows.map((r) => ({
-    revision: r.revision,
-    authorName: r.author_name,
-    createdAt: r.created_at.toISOString(),
-    message: r.message,
-    specHash: r.spec_hash,
-  }));
+interface RevisionRow {
+  revision: number;
+  created_at: Date;
+  message: string;
+  spec_hash: string;
+  author_name: string;
+  number: string;
+  title: string;
+  caption: string;
+  alt_text: string;
+  spec: unknown;
 }
 
-export async function findRevision(db: Knex, figureId: number, revision: number): Promise<Revision | undefined> {
-  const r = await db('figure_revisions as r')
-    .join('users as u', 'u.id', 'r.author_id')
-    .where({ 'r.figure_id': figureId, 'r.revision': revision })
-    .first('r.*', 'u.name as author_name');
-  if (!r) return undefined;
+const editable = (r: RevisionRow) => ({ number: r.number, title: r.title, caption: r.caption, altText: r.alt_text, spec: r.spec });
+
+function toRevisionSummary(r: RevisionRow, previous: RevisionRow | undefined): RevisionSummary {
   return {
     revision: r.revision,
     authorName: r.author_name,
     createdAt: r.created_at.toISOString(),
     message: r.message,
     specHash: r.spec_hash,
+    changedFields: previous ? changedPaths(editable(previous), editable(r)) : [],
+  };
+}
+
+function revisionsOf(db: Knex, figureId: number) {
+  return db('figure_revisions as r')
+    .join('users as u', 'u.id', 'r.author_id')
+    .where('r.figure_id', figureId)
+    .select('r.*', 'u.name as author_name');
+}
+
+export async function listRevisions(db: Knex, figureId: number): Promise<RevisionSummary[]> {
+  const rows: RevisionRow[] = await revisionsOf(db, figureId).orderBy('r.revision', 'asc');
+  return rows.map((r, i) => toRevisionSummary(r, rows[i - 1])).reverse();
+}
+
+export async function findRevision(db: Knex, figureId: number, revision: number): Promise<Revision | undefined> {
+  const rows: RevisionRow[] = await revisionsOf(db, figureId)
+    .whereIn('r.revision', [revision - 1, revision])
+    .orderBy('r.revision', 'asc');
+  const r = rows.find((x) => x.revision === revision);
+  if (!r) return undefined;
+  return {
+    ...toRevisionSummary(r, rows.find((x) => x.revision === revision - 1)),
     number: r.number,
     title: r.title,
     caption: r.caption,

@@ -134,6 +134,8 @@ export const revisionSummarySchema = z.object({
   createdAt: z.string(),
   message: z.string(),
   specHash: z.string(),
+  /** Dotted paths of what changed against the revision before ("title", "spec.kind.enclosed", …). */
+  changedFields: z.array(z.string()),
 });
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
 export const revisionSchema = revisionSummarySchema.extend({
@@ -238,3 +240,71 @@ export const exportRunSchema = z.object({
   bundle: z.object({ filename: z.string(), size: z.number(), sha256: z.string() }).nullable(),
 });
 export type ExportRun = z.infer<typeof exportRunSchema>;
+
+// ── Invitations, password reset, account, admin users, audit ───────────────
+export const invitationStatuses = ['pending', 'accepted', 'withdrawn', 'expired'] as const;
+export const invitationSchema = z.object({
+  id: z.number(),
+  projectId: z.number(),
+  email: z.string(),
+  role: projectRoleSchema,
+  invitedBy: z.string(),
+  status: z.enum(invitationStatuses),
+  createdAt: z.string(),
+  expiresAt: z.string(),
+});
+export type Invitation = z.infer<typeof invitationSchema>;
+export const createInvitationBody = z.object({ email: emailSchema, role: projectRoleSchema });
+export const tokenSchema = z.string().regex(/^[A-Za-z0-9_-]{32,64}$/, 'this link is not valid');
+export const invitationLookupSchema = z.object({
+  projectName: z.string(),
+  email: z.string(),
+  role: projectRoleSchema,
+  invitedBy: z.string(),
+  accountExists: z.boolean(),
+});
+export type InvitationLookup = z.infer<typeof invitationLookupSchema>;
+export const acceptInvitationBody = z.object({
+  token: tokenSchema,
+  /** Needed only when no account has the invited e-mail yet. */
+  name: trimmed(1, 120).optional(),
+  password: passwordSchema.optional(),
+});
+export const acceptInvitationResultSchema = z.object({ projectId: z.number(), session: sessionSchema });
+
+export const passwordResetRequestBody = z.object({ email: emailSchema });
+export const passwordResetConfirmBody = z.object({ token: tokenSchema, password: passwordSchema });
+
+export const accountSchema = z.object({
+  user: userSchema,
+  createdAt: z.string(),
+  otherSessions: z.number(),
+});
+export type Account = z.infer<typeof accountSchema>;
+export const updateAccountBody = z.object({ name: trimmed(1, 120) });
+export const changePasswordBody = z.object({ currentPassword: z.string().min(1).max(200), newPassword: passwordSchema });
+export const changeEmailBody = z.object({ newEmail: emailSchema, password: z.string().min(1).max(200) });
+export const confirmEmailBody = z.object({ token: tokenSchema });
+
+export const adminUserSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  isAdmin: z.boolean(),
+  disabled: z.boolean(),
+  createdAt: z.string(),
+  projects: z.number(),
+});
+export type AdminUser = z.infer<typeof adminUserSchema>;
+export const updateAdminUserBody = z
+  .object({ disabled: z.boolean().optional(), isAdmin: z.boolean().optional() })
+  .refine((b) => b.disabled !== undefined || b.isAdmin !== undefined, { message: 'nothing to change' });
+
+export const auditEntrySchema = z.object({
+  id: z.number(),
+  actorName: z.string(),
+  action: z.string(),
+  summary: z.string(),
+  createdAt: z.string(),
+});
+export type AuditEntry = z.infer<typeof auditEntrySchema>;

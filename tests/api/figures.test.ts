@@ -108,6 +108,7 @@ describe('saving revisions', () => {
       [2, 'Tighter surface'],
       [1, 'created'],
     ]);
+    expect(revs.body.map((x: { changedFields: string[] }) => x.changedFields)).toEqual([['spec.kind.enclosed'], []]);
     const r1 = revisionSchema.parse((await viewer.get(`/api/figures/${f.id}/revisions/1`)).body);
     expect(r1.spec.kind).toMatchObject({ enclosed: 0.9 });
     expect(r1.specHash).toMatch(/^[0-9a-f]{64}$/);
