@@ -4,6 +4,14 @@ import { ErrorPanel, Loading } from '../../../components/ui/status';
 import { formatDateTime } from '../../../utils/format-date';
 import { useReviewEvents } from '../api/get-review-events';
 
+const HISTORY_COLUMNS = [
+  ['When', ''],
+  ['Who', ''],
+  ['Change', ''],
+  ['Revision', 'text-right'],
+  ['Note', ''],
+] as const;
+
 interface ReviewHistoryProps {
   figureId: number;
   statusNames: Record<FigureStatus, string>;
@@ -23,21 +31,11 @@ export function ReviewHistory({ figureId, statusNames }: ReviewHistoryProps) {
         <caption className="sr-only">Status history, newest first</caption>
         <thead className="border-b border-stone-200 text-left text-stone-700">
           <tr>
-            <th scope="col" className="py-1.5 pr-3 font-semibold">
-              When
-            </th>
-            <th scope="col" className="py-1.5 pr-3 font-semibold">
-              Who
-            </th>
-            <th scope="col" className="py-1.5 pr-3 font-semibold">
-              Change
-            </th>
-            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">
-              Revision
-            </th>
-            <th scope="col" className="py-1.5 font-semibold">
-              Note
-            </th>
+            {HISTORY_COLUMNS.map(([label, align]) => (
+              <th key={label} scope="col" className={`py-1.5 pr-3 font-semibold ${align}`}>
+                {label}
+              </th>
+            ))}
           </tr>
         </thead>
         <tbody>
