@@ -18,6 +18,12 @@
  * are scaled to agree at the matching point m; the residual d of the scheme at m measures the kink,
  * J ≈ d/h, and first-order perturbation theory gives δE = −J y_m / (2μ ∫ r² y² dx).
  *
+ * A jump of V (and of V') at a grid point J, where V is given its mean, would cost the scheme two
+ * orders. The stencils centred at J ∓ 1 therefore use the one-sided f at J (f̄ ± h²[g]/24), and the
+ * stencil at J, expanded on each side, leaves the defect (h³/12)[y'''], [y'''] = −[g'] y − [g] y',
+ * which is put back with y' from the central difference corrected for the jump of y''. This restores
+ * order 4 (derivation: Taylor expansion of the scheme about J on each side; no published source claimed).
+ *
  * Deeply forbidden points (h² g/12 < F_FLOOR − 1) have f clamped at F_FLOOR: there the exact
  * solution changes by more than e^{3} per step, the clamp keeps the recurrence free of spurious
  * sign changes, and the levels' amplitude there is far below double precision.
@@ -34,6 +40,10 @@ export interface ShootingSystem {
   l: number;
   mu: number;
   originCharge: number;
+  /** Grid index of a jump of V (−1 when none) and the coefficients of its correction. */
+  jump: number;
+  jumpA: number;
+  jumpB: number;
   /** V + l(l+1)/(2μr²) at the grid points (hartree). */
   vEff: Float64Array;
   /** f_i = fConstant_i + E fSlope_i before clamping. */
@@ -57,6 +67,7 @@ export function shootingSystem(
   l: number,
   mu: number,
   originCharge: number,
+  jumpAt?: { index: number; dV: number; dVprime: number },
 ): ShootingSystem {
   const n = r.length;
   const h12 = (step * step) / 12;
@@ -70,12 +81,24 @@ export function shootingSystem(
     fConstant[i] = 1 - h12 * (2 * mu * r2 * V[i] + lh2);
     vEff[i] = V[i] + (l * (l + 1)) / (2 * mu * r2);
   }
+  let jumpA = 0;
+  let jumpB = 0;
+  if (jumpAt) {
+    const rm = r[jumpAt.index];
+    const dg = -2 * mu * rm * rm * jumpAt.dV; // [g]
+    const dgPrime = -4 * mu * rm * rm * jumpAt.dV - 2 * mu * rm * rm * rm * jumpAt.dVprime; // [dg/dx]
+    jumpA = ((step * step * step) / 12) * (-dgPrime - (step * dg * dg) / 4);
+    jumpB = (-step * step * dg) / 24;
+  }
   return {
     step,
     r,
     l,
     mu,
     originCharge,
+    jump: jumpAt ? jumpAt.index : -1,
+    jumpA,
+    jumpB,
     vEff,
     fConstant,
     fSlope,
@@ -93,6 +116,25 @@ function regularStart(s: ShootingSystem, i: number): number {
   const { r, l, step, originCharge } = s;
   return Math.exp((l + 0.5) * step * i) * (1 - (originCharge * r[i]) / (l + 1));
 }
+
+/** y_{i+1} from the stencil at i = J − 1, J or J + 1 next to a jump of V at J (see the header). */
+function outwardNearJump(s: ShootingSystem, i: number, y: Float64Array): number {
+  const { f, jump: J, jumpA: A, jumpB: B } = s;
+  if (i === J) return ((12 - 10 * f[J] + A) * y[J] - (f[J - 1] + B) * y[J - 1]) / (f[J + 1] - B);
+  if (i === J - 1) return ((12 - 10 * f[i]) * y[i] - f[i - 1] * y[i - 1]) / (f[J] + B);
+  return ((12 - 10 * f[i]) * y[i] - (f[J] - B) * y[J]) / f[i + 1];
+}
+
+/** y_{i−1} from the stencil at i = J − 1, J or J + 1 (the inward counterpart of outwardNearJump). */
+function inwardNearJump(s: ShootingSystem, i: number, y: Float64Array): number {
+  const { f, jump: J, jumpA: A, jumpB: B } = s;
+  if (i === J) return ((12 - 10 * f[J] + A) * y[J] - (f[J + 1] - B) * y[J + 1]) / (f[J - 1] + B);
+  if (i === J + 1) return ((12 - 10 * f[i]) * y[i] - f[i + 1] * y[i + 1]) / (f[J] - B);
+  return ((12 - 10 * f[i]) * y[i] - (f[J] + B) * y[J]) / f[i - 1];
+}
+
+/** Whether the stencil at i touches the jump point (J − 1 ≤ i ≤ J + 1). */
+const nearJump = (s: ShootingSystem, i: number): boolean => s.jump >= 0 && i >= s.jump - 1 && i <= s.jump + 1;
 
 /**
  * Outward sweep at energy E over the whole grid; fills s.f and s.yOut and returns the number of
@@ -112,7 +154,7 @@ export function sweepOutward(s: ShootingSystem, E: number): number {
   s.outwardValid = n - 1;
   let count = 0;
   for (let i = 1; i < n - 1; i++) {
-    const next = ((12 - 10 * f[i]) * y[i] - f[i - 1] * y[i - 1]) / f[i + 1];
+    const next = nearJump(s, i) ? outwardNearJump(s, i, y) : ((12 - 10 * f[i]) * y[i] - f[i - 1] * y[i - 1]) / f[i + 1];
     y[i + 1] = next;
     if ((next < 0 && y[i] > 0) || (next > 0 && y[i] < 0)) count++;
     if (Math.abs(next) > RESCALE_ABOVE) {
@@ -129,7 +171,7 @@ function consistentOutward(s: ShootingSystem, last: number): void {
   const { f, yOut: y } = s;
   if (last <= s.outwardValid) return;
   for (let i = 1; i < last; i++) {
-    y[i + 1] = ((12 - 10 * f[i]) * y[i] - f[i - 1] * y[i - 1]) / f[i + 1];
+    y[i + 1] = nearJump(s, i) ? outwardNearJump(s, i, y) : ((12 - 10 * f[i]) * y[i] - f[i - 1] * y[i - 1]) / f[i + 1];
     if (Math.abs(y[i + 1]) > RESCALE_ABOVE) {
       for (let j = 0; j <= i + 1; j++) y[j] /= RESCALE_ABOVE;
     }
@@ -144,6 +186,8 @@ function matchingIndex(s: ShootingSystem, E: number): number {
   const n = vEff.length;
   let m = n - 1;
   while (m > 0 && vEff[m] >= E) m--;
+  // The mismatch formula is the plain scheme's: never match on the jump itself.
+  if (m === s.jump) m--;
   if (m < 2) return -1;
   if (m > n - 4) {
     consistentOutward(s, n - 1);
@@ -167,7 +211,9 @@ export function energyCorrection(s: ShootingSystem, E: number): number {
   yIn[n - 1] = 0;
   yIn[n - 2] = 1;
   for (let i = n - 2; i > m - 1; i--) {
-    const prev = ((12 - 10 * f[i]) * yIn[i] - f[i + 1] * yIn[i + 1]) / f[i - 1];
+    const prev = nearJump(s, i)
+      ? inwardNearJump(s, i, yIn)
+      : ((12 - 10 * f[i]) * yIn[i] - f[i + 1] * yIn[i + 1]) / f[i - 1];
     yIn[i - 1] = prev;
     if (Math.abs(prev) > RESCALE_ABOVE) {
       for (let j = i - 1; j < n; j++) yIn[j] /= RESCALE_ABOVE;
@@ -181,7 +227,10 @@ export function energyCorrection(s: ShootingSystem, E: number): number {
   for (let i = 0; i <= m; i++) norm += r[i] * r[i] * yOut[i] * yOut[i];
   for (let i = m + 1; i < n; i++) norm += r[i] * r[i] * yIn[i] * yIn[i] * scale * scale;
   norm *= step;
-  const residual = f[m - 1] * yOut[m - 1] + f[m + 1] * yIn[m + 1] * scale + (10 * f[m] - 12) * yOut[m];
+  // Next to a jump at J the stencil takes the one-sided f there (see the header).
+  const fLeft = m - 1 === s.jump ? f[m - 1] - s.jumpB : f[m - 1];
+  const fRight = m + 1 === s.jump ? f[m + 1] + s.jumpB : f[m + 1];
+  const residual = fLeft * yOut[m - 1] + fRight * yIn[m + 1] * scale + (10 * f[m] - 12) * yOut[m];
   return -((residual / step) * yOut[m]) / (2 * mu * norm);
 }
 

@@ -14,7 +14,9 @@
  *  - `outerLimit`: largest radius where V may be evaluated (tabulated data without a tail); the grid
  *    ends there and a level that has not died out by then is refused.
  *  - `breakpoint`: a radius where V or a derivative jumps; the grid is laid so that it is a grid point.
- *  - `smooth`: false when V itself jumps, so the solver's error estimate uses order 2, not 4.
+ *  - `jump`: at the breakpoint, V(b⁺) − V(b⁻) and V'(b⁺) − V'(b⁻) (hartree, hartree/bohr); with it the
+ *    solver corrects its scheme there and keeps order 4. evaluate(b) must return the mean of the sides.
+ *  - `smooth`: false when V has a jump the solver is not told of, so the error estimate uses order 2.
  *  - `rangeEnd`: for short-range potentials, a radius beyond which |V| is below double-precision
  *    significance; there the zero-energy solution is free and the number of bound levels is exact.
  */
@@ -39,6 +41,7 @@ export interface Potential {
   outerLimit?: number;
   innerLimit?: number;
   breakpoint?: number;
+  jump?: { dV: number; dVprime: number };
   rangeEnd?: number;
   smooth: boolean;
 }

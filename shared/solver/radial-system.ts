@@ -34,5 +34,8 @@ export function radialSystem(
   const { r } = logGrid(innerRadius(potential), rEnd, step, potential.breakpoint);
   const V = new Float64Array(r.length);
   for (let i = 0; i < r.length; i++) V[i] = potential.evaluate(r[i]);
-  return shootingSystem(r, step, V, l, mu, potential.asymptotes.originCharge);
+  const { breakpoint, jump } = potential;
+  const index = jump && breakpoint !== undefined ? r.indexOf(breakpoint) : -1;
+  const jumpAt = jump && index > 1 && index < r.length - 2 ? { index, ...jump } : undefined;
+  return shootingSystem(r, step, V, l, mu, potential.asymptotes.originCharge, jumpAt);
 }

@@ -10,7 +10,8 @@
  * (WKB decay exponent ∫κ dr ≥ DECAY_EXPONENT past its outer turning point) and is refined until no
  * level turns by more than MAX_PHASE_PER_STEP per step. The levels are then solved again on a grid of
  * half the step and Richardson-extrapolated (L. F. Richardson, Phil. Trans. R. Soc. A 210, 307 (1911),
- * from memory) with the order of Numerov's scheme: 4 for smooth V, 2 when V jumps.
+ * from memory) with the order of Numerov's scheme: 4, or 2 for a potential that jumps without saying
+ * where and by how much (Potential.jump).
  *
  * Accuracy: `energy` is the extrapolated value; `error` = |E_h/2 − E_h|/(2^p − 1), the Richardson
  * estimate of the error of the fine-grid energy, which bounds that of the extrapolated one when the

@@ -1,7 +1,8 @@
 /**
  * Finite spherical well V(r) = −V₀ for r < a, 0 for r > a (hartree, bohr). Source: any QM text
  * (e.g. Griffiths 2nd ed., problem on the finite spherical well; from memory). V jumps at a: the
- * grid puts a point there with the mean of the two sides, and the error estimate uses order 2.
+ * grid puts a point there, V there is the mean of the two sides, and the solver is told the jump
+ * (+V₀) so that its scheme keeps order 4.
  */
 import { z } from 'zod';
 import type { Potential } from '../potential';
@@ -23,7 +24,8 @@ export function finiteWellPotential(input: unknown, field = 'potential'): Potent
     asymptotes: { threshold: 0, originCharge: 0, tailCharge: 0 },
     lengthScale: radius,
     breakpoint: radius,
+    jump: { dV: depth, dVprime: 0 },
     rangeEnd: radius,
-    smooth: false,
+    smooth: true,
   };
 }
