@@ -17,6 +17,7 @@ import { SpecSummary } from '../features/figures/components/spec-summary';
 import { StatusBadge } from '../features/figures/components/status-badge';
 import { useHouseStyle } from '../features/house-style/api/get-house-style';
 import { useProject } from '../features/projects/api/get-project';
+import { ReviewPanel } from '../features/review/components/review-panel';
 import { projectsQueryKey } from '../features/projects/api/get-projects';
 import { useDocumentTitle } from '../hooks/use-document-title';
 import { Figure3dView, hasThreeDimensionalView } from './figure-3d-view';
@@ -144,6 +145,7 @@ function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
         <Panel id="spec-title" title="What the figure shows">
           <SpecSummary spec={figure.spec} houseStyle={houseStyle.data} />
         </Panel>
+        <ReviewPanel figureId={figure.id} />
       </div>
       <div className="mt-6">
         <Panel id="revisions-title" title="Revisions">
