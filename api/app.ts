@@ -17,6 +17,9 @@ import { figureRoutes } from './routes/figures';
 import { projectRoutes } from './routes/projects';
 import { reviewRoutes } from './routes/review';
 import { exportRoutes, projectExportRoutes } from './routes/exports';
+import { figureBundleRoutes, projectBundleRoutes } from './routes/bundles';
+import { invitationRoutes } from './routes/invitations';
+import { accountRoutes } from './routes/account';
 import { createMailer, type Mailer } from './mail/mailer';
 import type { Jobs } from './jobs/jobs';
 
@@ -68,13 +71,19 @@ export function createApp({ env, db, mailer = createMailer(env), jobs }: AppDeps
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api', csrfProtection);
 
-  app.use('/api/auth', authRoutes(db, env, p));
+  app.use('/api/auth', authRoutes(db, env, p, mailer));
+  app.use('/api/account', accountRoutes(db, env, mailer));
+  const invitations = invitationRoutes(db, env, mailer);
+  app.use('/api/projects', invitations.project);
+  app.use('/api/invitations', invitations.invitation);
   app.use('/api/admin', adminRoutes(db));
   app.use('/api/projects', projectRoutes(db, jobs?.enqueueRerender ?? null));
   app.use('/api/projects', projectExportRoutes(db, jobs?.enqueueExport ?? null));
+  app.use('/api/projects', projectBundleRoutes(db));
   app.use('/api/exports', exportRoutes(db));
   app.use('/api/figures', figureRoutes(db));
   app.use('/api/figures', reviewRoutes(db, env, mailer));
+  app.use('/api/figures', figureBundleRoutes(db));
   app.use('/api', notFoundHandler);
 
   if (env.CLIENT_DIST) {

@@ -1,29 +1,21 @@
 // /api/auth: session, sign-in, sign-out, sign-up.
-import { Router, type Request } from 'express';
+import { Router } from 'express';
 import type { Knex } from 'knex';
 import type passport from 'passport';
 import { rateLimit } from 'express-rate-limit';
-import { loginBody, signupBody, type Session } from '../../shared/api/schemas';
+import { loginBody, passwordResetConfirmBody, passwordResetRequestBody, signupBody } from '../../shared/api/schemas';
 import type { Env } from '../config/env';
 import { AppError } from '../lib/app-error';
 import { hashPassword } from '../auth/passwords';
-import { csrfToken } from '../middleware/csrf';
+import { endSessionsOf, logIn, sessionBody } from '../auth/session';
+import { hashToken, newToken } from '../lib/tokens';
+import { publicUrl, sendQuietly, type Mailer } from '../mail/mailer';
 import { validated } from '../middleware/validate';
-import { getSetting, insertUser, toUser } from '../repositories/users';
+import { findUserByEmail, getSetting, insertUser, toUser } from '../repositories/users';
 
-async function sessionBody(db: Knex, req: Request): Promise<Session> {
-  return {
-    user: req.user ?? null,
-    csrfToken: csrfToken(req),
-    signupEnabled: await getSetting(db, 'signup_enabled', true),
-  };
-}
+export const RESET_MINUTES = 60;
 
-function logIn(req: Request, user: Express.User): Promise<void> {
-  return new Promise((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
-}
-
-export function authRoutes(db: Knex, env: Env, p: passport.PassportStatic): Router {
+export function authRoutes(db: Knex, env: Env, p: passport.PassportStatic, mailer: Mailer): Router {
   const r = Router();
   const limiter = rateLimit({
     windowMs: 15 * 60 * 1000,
@@ -80,6 +72,55 @@ export function authRoutes(db: Knex, env: Env, p: passport.PassportStatic): Rout
       });
       await logIn(req, toUser(row));
       res.status(201).json(await sessionBody(db, req));
+    }),
+  );
+  // Password reset: the answer is the same whether or not the account exists.
+  r.post(
+    '/password-reset',
+    limiter,
+    validated({ body: passwordResetRequestBody }, async ({ body }, _req, res) => {
+      const user = await findUserByEmail(db, body.email);
+      if (user && !user.disabled) {
+        const { token, hash } = newToken();
+        await db('user_tokens').insert({
+          user_id: user.id,
+          purpose: 'password_reset',
+          token_hash: hash,
+          expires_at: new Date(Date.now() + RESET_MINUTES * 60 * 1000),
+        });
+        await sendQuietly(mailer, {
+          to: user.email,
+          subject: 'Reset your Lobewright password',
+          text: `Someone asked to reset the password of your Lobewright account. If it was you, choose a new password here within ${RESET_MINUTES} minutes:\n\n${publicUrl(env)}/reset-password?token=${token}\n\nIf it was not you, ignore this message; your password stays as it is.\n`,
+        });
+      }
+      res.status(202).json({ ok: true });
+    }),
+  );
+
+  r.post(
+    '/password-reset/confirm',
+    limiter,
+    validated({ body: passwordResetConfirmBody }, async ({ body }, req, res) => {
+      const user = await db.transaction(async (trx) => {
+        const row = await trx('user_tokens')
+          .where({ token_hash: hashToken(body.token), purpose: 'password_reset' })
+          .forUpdate()
+          .first();
+        if (!row || row.used_at) {
+          throw new AppError(400, 'invalid_token', 'this reset link is not valid or was already used', {
+            token: 'not a valid or unused reset link',
+          });
+        }
+        if (row.expires_at <= new Date()) throw new AppError(410, 'expired', 'this reset link has expired; ask for a new one');
+        await trx('user_tokens').where({ id: row.id }).update({ used_at: trx.fn.now() });
+        await trx('users').where({ id: row.user_id }).update({ password_hash: await hashPassword(body.password, env.BCRYPT_COST) });
+        const u = await trx('users').where({ id: row.user_id }).first();
+        return toUser(u);
+      });
+      await endSessionsOf(db, user.id);
+      await logIn(req, user);
+      res.json(await sessionBody(db, req));
     }),
   );
   return r;

@@ -7,6 +7,7 @@ import { AppError, notFound } from '../lib/app-error';
 import { currentUser, requireUser } from '../middleware/require-user';
 import { validated } from '../middleware/validate';
 import { authoriseProject } from '../services/project-access';
+import { recordAudit } from '../services/audit';
 import { createExportRun, exportRunProject, findBundle, findExportRun, listExportRuns } from '../services/exports';
 
 const projectParams = z.object({ projectId: idParam });
@@ -28,7 +29,9 @@ export function projectExportRoutes(db: Knex, enqueue: ((runId: number) => Promi
       const user = currentUser(req);
       await authoriseProject(db, user, params.projectId, 'read');
       if (!enqueue) throw new AppError(503, 'exports_unavailable', 'exports are not available on this server');
-      res.status(202).json(await createExportRun(db, user, params.projectId, body, enqueue));
+      const run = await createExportRun(db, user, params.projectId, body, enqueue);
+      await recordAudit(db, { projectId: params.projectId, actorId: user.id, action: 'export.started', summary: `started export run ${run.id} (${run.selection}; ${run.formats.join(', ')})` });
+      res.status(202).json(run);
     }),
   );
   return r;

@@ -11,6 +11,7 @@ import { deleteFigure, duplicateFigure, updateFigure } from '../services/figures
 import { renderFormats } from '../render/render-figure';
 import { renderStoredFigure } from '../services/render-service';
 import { authoriseFigure } from '../services/project-access';
+import { recordAudit } from '../services/audit';
 
 const figureParams = z.object({ figureId: idParam });
 const revisionParams = z.object({ figureId: idParam, revision: idParam });
@@ -37,8 +38,10 @@ export function figureRoutes(db: Knex): Router {
     '/:figureId',
     validated({ params: figureParams, body: updateFigureBody }, async ({ params, body }, req, res) => {
       const user = currentUser(req);
-      await authoriseFigure(db, user, params.figureId, 'edit');
-      res.json(await updateFigure(db, user, params.figureId, body));
+      const { projectId } = await authoriseFigure(db, user, params.figureId, 'edit');
+      const figure = await updateFigure(db, user, params.figureId, body);
+      await recordAudit(db, { projectId, actorId: user.id, action: 'figure.saved', summary: `saved figure ${figure.number || `#${figure.id}`} as revision ${figure.revision}` });
+      res.json(figure);
     }),
   );
 
@@ -54,8 +57,10 @@ export function figureRoutes(db: Knex): Router {
   r.delete(
     '/:figureId',
     validated({ params: figureParams }, async ({ params }, req, res) => {
-      await authoriseFigure(db, currentUser(req), params.figureId, 'edit');
+      const { projectId } = await authoriseFigure(db, currentUser(req), params.figureId, 'edit');
+      const gone = await findFigure(db, params.figureId);
       await deleteFigure(db, params.figureId);
+      await recordAudit(db, { projectId, actorId: currentUser(req).id, action: 'figure.deleted', summary: `deleted figure ${gone?.number || `#${params.figureId}`} "${gone?.title}"` });
       res.status(204).end();
     }),
   );

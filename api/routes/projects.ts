@@ -30,6 +30,7 @@ import { findUserByEmail } from '../repositories/users';
 import { createFigure } from '../services/figures';
 import { bulkFigureAction, reorderFigures } from '../services/figure-list';
 import { authoriseProject } from '../services/project-access';
+import { listAudit, recordAudit } from '../services/audit';
 
 const projectParams = z.object({ projectId: idParam });
 const memberParams = z.object({ projectId: idParam, userId: idParam });
@@ -69,6 +70,11 @@ export function projectRoutes(db: Knex, enqueueRerender: ((projectId: number) =>
       const user = currentUser(req);
       await authoriseProject(db, user, params.projectId, 'manage');
       await updateProject(db, params.projectId, body);
+      const audit = (action: 'project.renamed' | 'project.archived' | 'project.restored', summary: string) =>
+        recordAudit(db, { projectId: params.projectId, actorId: user.id, action, summary });
+      if (body.name !== undefined) await audit('project.renamed', `renamed the project to "${body.name}"`);
+      if (body.archived === true) await audit('project.archived', 'archived the project');
+      if (body.archived === false) await audit('project.restored', 'restored the project from the archive');
       res.json(await findProject(db, user.id, params.projectId));
     }),
   );
@@ -90,9 +96,19 @@ export function projectRoutes(db: Knex, enqueueRerender: ((projectId: number) =>
       await db('projects')
         .where({ id: params.projectId })
         .update({ house_style: JSON.stringify(body), updated_at: db.fn.now() });
+      const changed = [...Object.keys(body.look), ...Object.keys(body.print)].join(', ') || 'reset to the defaults';
+      await recordAudit(db, { projectId: params.projectId, actorId: currentUser(req).id, action: 'house_style.changed', summary: `changed the house style (${changed})` });
       // Figures that follow the house style now print differently: render them again in the background.
       await enqueueRerender?.(params.projectId);
       res.json(parseHouseStyle(body));
+    }),
+  );
+
+  r.get(
+    '/:projectId/audit',
+    validated({ params: projectParams }, async ({ params }, req, res) => {
+      await authoriseProject(db, currentUser(req), params.projectId, 'manage');
+      res.json(await listAudit(db, params.projectId));
     }),
   );
 
@@ -122,6 +138,7 @@ export function projectRoutes(db: Knex, enqueueRerender: ((projectId: number) =>
       if (inserted.length === 0)
         throw conflict('already_member', `${user.name} is already a member of this project`);
       const member = (await listMembers(db, params.projectId)).find((m) => m.userId === Number(user.id));
+      await recordAudit(db, { projectId: params.projectId, actorId: currentUser(req).id, action: 'member.added', summary: `added ${user.name} as ${body.role}` });
       res.status(201).json(member);
     }),
   );
@@ -139,6 +156,7 @@ export function projectRoutes(db: Knex, enqueueRerender: ((projectId: number) =>
         await trx('memberships').where({ project_id: params.projectId, user_id: params.userId }).update({ role: body.role });
       });
       const member = (await listMembers(db, params.projectId)).find((m) => m.userId === params.userId);
+      await recordAudit(db, { projectId: params.projectId, actorId: currentUser(req).id, action: 'member.role_changed', summary: `made ${member?.name} ${body.role}` });
       res.json(member);
     }),
   );
@@ -154,6 +172,8 @@ export function projectRoutes(db: Knex, enqueueRerender: ((projectId: number) =>
         if (row.role === 'owner' && owners <= 1)
           throw conflict('last_owner', 'the last owner cannot be removed; make someone else an owner first');
         await trx('memberships').where({ project_id: params.projectId, user_id: params.userId }).delete();
+        const removed = await trx('users').where({ id: params.userId }).first('name');
+        await recordAudit(trx, { projectId: params.projectId, actorId: currentUser(req).id, action: 'member.removed', summary: `removed ${removed.name} (${row.role})` });
       });
       res.status(204).end();
     }),
@@ -173,6 +193,7 @@ export function projectRoutes(db: Knex, enqueueRerender: ((projectId: number) =>
     validated({ params: projectParams, body: figureOrderBody }, async ({ params, body }, req, res) => {
       await authoriseProject(db, currentUser(req), params.projectId, 'edit');
       await reorderFigures(db, params.projectId, body);
+      await recordAudit(db, { projectId: params.projectId, actorId: currentUser(req).id, action: 'figure.reordered', summary: `put the figures in the order ${body.figures.map((f) => f.number || `#${f.id}`).join(', ')}` });
       res.json(await listFigures(db, params.projectId));
     }),
   );
@@ -191,7 +212,9 @@ export function projectRoutes(db: Knex, enqueueRerender: ((projectId: number) =>
     validated({ params: projectParams, body: createFigureBody }, async ({ params, body }, req, res) => {
       const user = currentUser(req);
       await authoriseProject(db, user, params.projectId, 'edit');
-      res.status(201).json(await createFigure(db, user, params.projectId, body));
+      const figure = await createFigure(db, user, params.projectId, body);
+      await recordAudit(db, { projectId: params.projectId, actorId: user.id, action: 'figure.created', summary: `created figure ${figure.number || `#${figure.id}`} "${figure.title}"` });
+      res.status(201).json(figure);
     }),
   );
   return r;

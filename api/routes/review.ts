@@ -10,6 +10,7 @@ import { validated } from '../middleware/validate';
 import { findFigure } from '../repositories/figures';
 import { authoriseFigure } from '../services/project-access';
 import { addComment, applyReviewAction, listComments, listReviewEvents, reviewerEmails } from '../services/review';
+import { recordAudit } from '../services/audit';
 
 const figureParams = z.object({ figureId: idParam });
 
@@ -49,6 +50,12 @@ export function reviewRoutes(db: Knex, env: Env, mailer: Mailer): Router {
       const { projectId, role } = await authoriseFigure(db, user, params.figureId, 'read');
       const change = await applyReviewAction(db, user, role, params.figureId, body);
       const figure = (await findFigure(db, params.figureId))!;
+      await recordAudit(db, {
+        projectId,
+        actorId: user.id,
+        action: 'figure.review',
+        summary: `${change.to === 'approved' ? `approved revision ${change.revision} of` : change.to === 'in_review' ? 'submitted for review' : 'asked for changes to'} figure ${figure.number || `#${figure.id}`}`,
+      });
       if (change.to === 'in_review') {
         const link = `${publicUrl(env)}/figures/${figure.id}`;
         for (const to of await reviewerEmails(db, projectId)) {
