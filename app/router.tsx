@@ -5,6 +5,7 @@ import { RequireUser } from './features/auth/components/require-user';
 import { AdminRoute } from './routes/admin';
 import { AppLayout } from './routes/app-layout';
 import { NotFoundRoute } from './routes/not-found';
+import { ProjectExportsRoute } from './routes/project-exports';
 import { ProjectFiguresRoute } from './routes/project-figures';
 import { ProjectLayout } from './routes/project-layout';
 import { ProjectMembersRoute } from './routes/project-members';
@@ -36,6 +37,7 @@ const router = createBrowserRouter([
             children: [
               { index: true, element: <ProjectFiguresRoute /> },
               { path: 'members', element: <ProjectMembersRoute /> },
+              { path: 'exports', element: <ProjectExportsRoute /> },
               { path: 'settings', element: <ProjectSettingsRoute /> },
             ],
           },

@@ -52,6 +52,9 @@ function ProjectFrame({ projectId }: { projectId: number }) {
         <NavLink to={`/projects/${p.id}`} end className={tabClasses}>
           Figures
         </NavLink>
+        <NavLink to={`/projects/${p.id}/exports`} className={tabClasses}>
+          Exports
+        </NavLink>
         <NavLink to={`/projects/${p.id}/members`} className={tabClasses}>
           Members
         </NavLink>
