@@ -1,7 +1,8 @@
 // Radial solver against an independent method: SciPy shooting (solve_ivp DOP853, rtol 1e-13, with
 // brentq; scripts/fixtures/radial-solver.py → tests/fixtures/radial-solver/levels.json), for potentials
 // without a closed form: Yukawa with l = 0…2, the core-screened Coulomb model, a Green–Sellin–Zachor
-// valence model and a finite-size Pb-like nucleus (Z = 82, R = 1.3e-4 bohr).
+// valence model, the finite spherical well for l = 0…2 and a finite-size Pb-like nucleus
+// (Z = 82, R = 1.3e-4 bohr).
 // Measured agreement on the default grid: ≤ 9e-12 relative, except the Z = 82 nucleus, 2e-10 relative,
 // where the difference is the reference's: this solver moves by < 1e-9 hartree as its step halves
 // twice. Tolerances: 3e-11 relative, and 1e-9 relative for the Z = 82 nucleus.
