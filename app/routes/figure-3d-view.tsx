@@ -1,14 +1,14 @@
-// The figure page's 3D view for isosurface, cloud and angular-surface figures: the spec drawn with
-// the project's house style, turned freely; editors can keep a new view as a revision. three.js
-// loads only when such a figure is opened.
-import { lazy, Suspense, useState } from 'react';
+// The composer's 3D preview for isosurface, cloud and angular-surface figures: the orbital view
+// (three.js, loaded only when such a figure is shown) with a ready signal, and, when the only
+// unsaved change is a turned view, the bar that keeps that view as a new revision.
+import { lazy, Suspense } from 'react';
 import type { Figure } from '../../shared/api/schemas';
-import { canonicalJson } from '../../shared/spec/canonical-json';
 import type { FigureSpec } from '../../shared/spec/figure-spec';
-import type { HouseStyle } from '../../shared/spec/house-style';
-import { resolveFigureSpec } from '../../shared/spec/resolve-figure-spec';
+import type { ResolvedFigureSpec } from '../../shared/spec/resolve-figure-spec';
+import { canonicalJson } from '../../shared/spec/canonical-json';
 import { Loading } from '../components/ui/status';
 import { SaveViewBar } from '../features/figures/components/save-view-bar';
+import { useOrbitalGeometry } from '../features/orbital-view/hooks/use-orbital-geometry';
 
 const OrbitalViewport = lazy(() =>
   import('../features/orbital-view/components/orbital-viewport').then((m) => ({
@@ -18,46 +18,40 @@ const OrbitalViewport = lazy(() =>
 
 type View = FigureSpec['view'];
 
-/** Kinds the 3D view draws; slices, radial plots and level diagrams are 2D figures. */
-export function hasThreeDimensionalView(spec: FigureSpec): boolean {
-  const { kind } = spec;
-  return (
-    kind.type === 'isosurface' ||
-    kind.type === 'cloud' ||
-    (kind.type === 'angular' && kind.mode === 'surface')
-  );
-}
-
-interface Figure3dViewProps {
+interface Figure3dPreviewProps {
+  spec: ResolvedFigureSpec;
   figure: Figure;
-  houseStyle: HouseStyle;
   canEdit: boolean;
+  /** The spec being edited differs from the saved one in its view alone. */
+  viewOnlyChange: boolean;
+  onViewChange?: (view: View) => void;
 }
 
-export function Figure3dView({ figure, houseStyle, canEdit }: Figure3dViewProps) {
-  // The view the reader turned to, tied to the revision it was turned from.
-  const [turned, setTurned] = useState<{ revision: number; view: View } | null>(null);
-  const view = turned && turned.revision === figure.revision ? turned.view : figure.spec.view;
-  const changed = canonicalJson(view) !== canonicalJson(figure.spec.view);
-  const resolved = resolveFigureSpec({ ...figure.spec, view }, houseStyle);
-
+export function Figure3dPreview({ spec, figure, canEdit, viewOnlyChange, onViewChange }: Figure3dPreviewProps) {
+  // Joins the viewport's request (same cache key), to say when the figure on screen is the one asked for.
+  const geometry = useOrbitalGeometry(spec);
+  const turned = canonicalJson(spec.view) !== canonicalJson(figure.spec.view);
   return (
     <div className="space-y-3">
+      <p role="status" data-figure-ready={geometry.status === 'ready'} className="sr-only">
+        {geometry.status === 'ready'
+          ? `3D figure ready: ${geometry.facts?.label ?? ''}`
+          : geometry.status === 'error'
+            ? `3D figure failed: ${geometry.error ?? ''}`
+            : `Computing the 3D figure: ${Math.round(100 * geometry.progress)} %`}
+      </p>
       <Suspense fallback={<Loading label="Loading the 3D view…" />}>
-        <OrbitalViewport
-          spec={resolved}
-          onViewChange={(next) => setTurned({ revision: figure.revision, view: next })}
-        />
+        <OrbitalViewport spec={spec} onViewChange={onViewChange} />
       </Suspense>
-      {changed && (
+      {canEdit && viewOnlyChange && turned && onViewChange ? (
         <SaveViewBar
           figure={figure}
-          view={view}
+          view={spec.view}
           canEdit={canEdit}
-          onSaved={() => setTurned(null)}
-          onReset={() => setTurned(null)}
+          onSaved={() => undefined}
+          onReset={() => onViewChange(figure.spec.view)}
         />
-      )}
+      ) : null}
     </div>
   );
 }

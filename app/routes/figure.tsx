@@ -1,5 +1,6 @@
-// /figures/:figureId: one figure: its details (editable by editors, saved as revisions), its spec
-// in words, and its revision history. The composer will join this page.
+// /figures/:figureId: one figure: the composer (controls, live preview, save as a new revision,
+// downloads), its details (editable by editors, saved as revisions), its spec in words, its review
+// and its revision history.
 import { useQueryClient } from '@tanstack/react-query';
 import { Link, useNavigate, useParams } from 'react-router';
 import { roleAllows } from '../../shared/api/roles';
@@ -20,7 +21,11 @@ import { useProject } from '../features/projects/api/get-project';
 import { ReviewPanel } from '../features/review/components/review-panel';
 import { projectsQueryKey } from '../features/projects/api/get-projects';
 import { useDocumentTitle } from '../hooks/use-document-title';
-import { Figure3dView, hasThreeDimensionalView } from './figure-3d-view';
+import { Composer } from '../features/composer/components/composer';
+import { useCreateFigure } from '../features/figures/api/create-figure';
+import { useUpdateFigure } from '../features/figures/api/update-figure';
+import type { HouseStyle } from '../../shared/spec/house-style';
+import { Figure3dPreview } from './figure-3d-view';
 import { NotFoundRoute } from './not-found';
 import { parseIdParam } from './parse-id-param';
 
@@ -114,19 +119,26 @@ function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
         </div>
       </PageHeader>
 
-      {hasThreeDimensionalView(figure.spec) && (
-        <div className="mb-6">
-          <Panel id="view-title" title="3D view">
-            {houseStyle.isPending ? (
-              <Loading label="Loading the project’s house style…" />
-            ) : houseStyle.isError ? (
-              <ErrorPanel error={houseStyle.error} onRetry={() => void houseStyle.refetch()} />
-            ) : (
-              <Figure3dView figure={figure} houseStyle={houseStyle.data} canEdit={canEdit} />
-            )}
-          </Panel>
-        </div>
-      )}
+      <div className="mb-6">
+        <Panel id="composer-title" title="Composer">
+          {houseStyle.isPending ? (
+            <Loading label="Loading the project’s house style…" />
+          ) : houseStyle.isError ? (
+            <ErrorPanel error={houseStyle.error} onRetry={() => void houseStyle.refetch()} />
+          ) : (
+            <FigureComposer
+              key={figure.id}
+              figure={figure}
+              houseStyle={houseStyle.data}
+              canEdit={canEdit}
+              onDuplicated={(copy) => {
+                refreshProjects();
+                void navigate(`/figures/${copy.id}`);
+              }}
+            />
+          )}
+        </Panel>
+      </div>
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Panel id="details-title" title="Details">
           {canEdit ? (
@@ -153,5 +165,47 @@ function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
         </Panel>
       </div>
     </>
+  );
+}
+
+function FigureComposer({
+  figure,
+  houseStyle,
+  canEdit,
+  onDuplicated,
+}: {
+  figure: Figure;
+  houseStyle: HouseStyle;
+  canEdit: boolean;
+  onDuplicated: (copy: Figure) => void;
+}) {
+  const update = useUpdateFigure(figure.id, figure.projectId);
+  const create = useCreateFigure(figure.projectId);
+  return (
+    <Composer
+      figure={figure}
+      houseStyle={houseStyle}
+      canEdit={canEdit}
+      readOnlyReason="Read-only: you can look at this figure and download it, but not change it."
+      save={(spec, baseRevision, message) => update.mutateAsync({ baseRevision, spec, message })}
+      duplicate={async (spec) => {
+        const copy = await create.mutateAsync({
+          title: `${figure.title} (copy)`,
+          caption: figure.caption,
+          altText: figure.altText,
+          spec,
+        });
+        onDuplicated(copy);
+      }}
+      render3d={(spec, { onViewChange, viewOnlyChange }) => (
+        <Figure3dPreview
+          spec={spec}
+          figure={figure}
+          canEdit={canEdit}
+          viewOnlyChange={viewOnlyChange}
+          onViewChange={onViewChange}
+        />
+      )}
+    />
   );
 }

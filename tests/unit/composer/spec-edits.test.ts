@@ -157,3 +157,25 @@ describe('house style and print size', () => {
     expect(pixelsFor(84, 300)).toBe(992);
   });
 });
+
+describe('the read-out of the state', () => {
+  it('when the state is hydrogen 2p (infinite nucleus), then E = −1/8 hartree, ⟨r⟩ = 5 bohr, r_mp = 4 bohr, nodes 0 / 1', async () => {
+    // E_n = −Z²/(2n²) hartree; ⟨r⟩ = [3n² − l(l+1)]/(2Z) a₀; r_mp = n²/Z for l = n − 1 (REFERENCE.md §4, §8; textbook).
+    const { stateFacts } = await import('../../../app/features/composer/utils/state-facts');
+    const f = stateFacts(spec(2, 1, 0));
+    expect(f.terms[0]).toMatchObject({ radialNodes: 0, angularNodes: 1, share: 1 });
+    expect(f.terms[0].energyHartree).toBeCloseTo(-0.125, 14);
+    expect(f.terms[0].meanRadius).toBeCloseTo(5, 12);
+    expect(f.terms[0].mostProbableRadius).toBeCloseTo(4, 9);
+    expect(f.mixesEnergies).toBe(false);
+  });
+
+  it('when 1s and 2p_z have equal weights, then each has half the probability and the state mixes energies', async () => {
+    const { stateFacts } = await import('../../../app/features/composer/utils/state-facts');
+    const s = setQuantumNumber(addTerm(spec(1, 0, 0)), 1, 'l', 1);
+    const f = stateFacts(s);
+    expect(f.terms.map((t) => t.share)).toEqual([0.5, 0.5]);
+    expect(f.mixesEnergies).toBe(true);
+    expect(f.meanEnergyEv).toBeCloseTo((f.terms[0].energyEv + f.terms[1].energyEv) / 2, 12);
+  });
+});

@@ -80,3 +80,6 @@ export function specHistoryReducer(state: SpecHistory, action: SpecHistoryAction
 export const canUndo = (h: SpecHistory): boolean => h.past.length > 0;
 export const canRedo = (h: SpecHistory): boolean => h.future.length > 0;
 export const hasUnsavedChanges = (h: SpecHistory): boolean => !sameSpec(h.present, h.saved);
+
+/** How a control hands its edit to the history: the whole new spec and the field it changed. */
+export type EditSpec = (spec: FigureSpec, field: string) => void;
