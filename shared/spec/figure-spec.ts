@@ -6,6 +6,8 @@ import { z } from 'zod';
 export const FIGURE_SPEC_VERSION = 1;
 export const MAX_N = 30;
 export const MAX_Z = 92;
+/** Uploaded data sets one radial figure may draw. */
+export const MAX_FIGURE_DATASETS = 6;
 
 const hexColour = z.string().regex(/^#[0-9a-fA-F]{6}$/, 'use a colour such as #1f6feb');
 const finite = z.number().finite();
@@ -90,6 +92,15 @@ export const radialKindSchema = z.object({
   rMax: z.number().positive().max(5000).optional(),
   showNodes: z.boolean().default(true),
   showMostProbable: z.boolean().default(true),
+  /**
+   * Uploaded data sets of the figure's project drawn beside the computed curves, each in the panel
+   * of its quantity. Optional, so specs without it keep their schema version and their hash.
+   */
+  datasets: z
+    .array(z.object({ id: z.number().int().positive(), label: z.string().trim().max(80).optional() }))
+    .max(MAX_FIGURE_DATASETS)
+    .refine((d) => new Set(d.map((x) => x.id)).size === d.length, 'list each dataset once')
+    .optional(),
 });
 export const cloudKindSchema = z.object({
   type: z.literal('cloud'),

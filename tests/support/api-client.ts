@@ -52,6 +52,23 @@ export class ApiClient {
     return { status: res.status, bytes: Buffer.from(await res.arrayBuffer()), headers: res.headers };
   }
 
+  /** POST multipart/form-data with one file (and text fields), as a browser form upload does. */
+  async upload<T = Json>(
+    path: string,
+    file: { field: string; name: string; content: string | Buffer; type?: string },
+    fields: Record<string, string> = {},
+  ): Promise<Reply<T>> {
+    if (!this.csrf) await this.refreshSession();
+    const form = new FormData();
+    for (const [k, v] of Object.entries(fields)) form.append(k, v);
+    form.append(file.field, new Blob([typeof file.content === 'string' ? file.content : new Uint8Array(file.content)], { type: file.type ?? 'application/octet-stream' }), file.name);
+    const headers: Record<string, string> = { 'x-csrf-token': this.csrf };
+    if (this.cookie) headers.cookie = this.cookie;
+    const res = await fetch(this.baseUrl + path, { method: 'POST', headers, body: form });
+    const text = await res.text();
+    return { status: res.status, body: text ? JSON.parse(text) : undefined, headers: res.headers };
+  }
+
   async refreshSession(): Promise<Reply> {
     return this.request('GET', '/api/auth/session');
   }
