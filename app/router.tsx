@@ -2,15 +2,21 @@
 import { createBrowserRouter, Outlet } from 'react-router';
 import { RouterProvider } from 'react-router/dom';
 import { RequireUser } from './features/auth/components/require-user';
+import { AcceptInvitationRoute } from './routes/accept-invitation';
+import { AccountRoute } from './routes/account';
 import { AdminRoute } from './routes/admin';
 import { AppLayout } from './routes/app-layout';
+import { ConfirmEmailRoute } from './routes/confirm-email';
+import { ForgotPasswordRoute } from './routes/forgot-password';
 import { NotFoundRoute } from './routes/not-found';
+import { ProjectAuditRoute } from './routes/project-audit';
 import { ProjectExportsRoute } from './routes/project-exports';
 import { ProjectFiguresRoute } from './routes/project-figures';
 import { ProjectLayout } from './routes/project-layout';
 import { ProjectMembersRoute } from './routes/project-members';
 import { ProjectSettingsRoute } from './routes/project-settings';
 import { ProjectsRoute } from './routes/projects';
+import { ResetPasswordRoute } from './routes/reset-password';
 import { RouteError } from './routes/route-error';
 import { SignInRoute } from './routes/sign-in';
 import { SignUpRoute } from './routes/sign-up';
@@ -22,6 +28,9 @@ const router = createBrowserRouter([
     children: [
       { path: '/sign-in', element: <SignInRoute /> },
       { path: '/sign-up', element: <SignUpRoute /> },
+      { path: '/forgot-password', element: <ForgotPasswordRoute /> },
+      { path: '/reset-password', element: <ResetPasswordRoute /> },
+      { path: '/invitations/accept', element: <AcceptInvitationRoute /> },
       {
         element: (
           <RequireUser>
@@ -39,6 +48,7 @@ const router = createBrowserRouter([
               { path: 'members', element: <ProjectMembersRoute /> },
               { path: 'exports', element: <ProjectExportsRoute /> },
               { path: 'settings', element: <ProjectSettingsRoute /> },
+              { path: 'audit', element: <ProjectAuditRoute /> },
             ],
           },
           {
@@ -47,6 +57,8 @@ const router = createBrowserRouter([
             lazy: () => import('./routes/figure').then((m) => ({ Component: m.FigureRoute })),
           },
           { path: '/admin', element: <AdminRoute /> },
+          { path: '/account', element: <AccountRoute /> },
+          { path: '/confirm-email', element: <ConfirmEmailRoute /> },
           { path: '*', element: <NotFoundRoute /> },
         ],
       },

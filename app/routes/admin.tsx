@@ -4,6 +4,7 @@ import { PageHeader } from '../components/ui/page-header';
 import { ErrorPanel, Loading } from '../components/ui/status';
 import { useSiteSettings } from '../features/admin/api/get-site-settings';
 import { SignUpSwitch } from '../features/admin/components/sign-up-switch';
+import { UserList } from '../features/admin/components/user-list';
 import { getSessionQueryOptions } from '../features/auth/api/get-session';
 import { useSignedInUser } from '../features/auth/hooks/use-signed-in-user';
 import { useDocumentTitle } from '../hooks/use-document-title';
@@ -19,10 +20,10 @@ export function AdminRoute() {
       </>
     );
   }
-  return <SiteSettingsPage />;
+  return <SiteSettingsPage currentUserId={user.id} />;
 }
 
-function SiteSettingsPage() {
+function SiteSettingsPage({ currentUserId }: { currentUserId: number }) {
   const settings = useSiteSettings();
   const queryClient = useQueryClient();
   return (
@@ -48,6 +49,15 @@ function SiteSettingsPage() {
             }
           />
         )}
+      </section>
+      <section
+        aria-labelledby="users-title"
+        className="mt-6 rounded-xl border border-stone-200 bg-white p-6"
+      >
+        <h2 id="users-title" className="mb-4 text-lg font-semibold">
+          Users
+        </h2>
+        <UserList currentUserId={currentUserId} />
       </section>
     </>
   );

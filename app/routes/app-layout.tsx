@@ -41,6 +41,9 @@ export function AppLayout() {
               <span className="sr-only">Signed in as </span>
               <span className="font-semibold text-stone-900">{user.name}</span>
             </span>
+            <NavLink to="/account" className={navClasses}>
+              Account
+            </NavLink>
             <SignOutButton />
           </div>
         </div>

@@ -6,6 +6,7 @@ import { RoleBadge } from '../components/ui/role-badge';
 import { ErrorPanel, Loading } from '../components/ui/status';
 import { useProject } from '../features/projects/api/get-project';
 import { useDocumentTitle } from '../hooks/use-document-title';
+import { roleAllows } from '../../shared/api/roles';
 import type { Project } from '../../shared/api/schemas';
 import { cn } from '../utils/cn';
 import { parseIdParam } from './parse-id-param';
@@ -61,6 +62,11 @@ function ProjectFrame({ projectId }: { projectId: number }) {
         <NavLink to={`/projects/${p.id}/settings`} className={tabClasses}>
           Settings
         </NavLink>
+        {roleAllows(p.role, 'manage') && (
+          <NavLink to={`/projects/${p.id}/audit`} className={tabClasses}>
+            Audit
+          </NavLink>
+        )}
       </nav>
       <Outlet context={p satisfies Project} />
     </>

@@ -4,6 +4,8 @@ import { roleAllows } from '../../shared/api/roles';
 import { ErrorPanel, Loading } from '../components/ui/status';
 import { useSignedInUser } from '../features/auth/hooks/use-signed-in-user';
 import { useMembers } from '../features/members/api/get-members';
+import { InviteForm } from '../features/invitations/components/invite-form';
+import { PendingInvitations } from '../features/invitations/components/pending-invitations';
 import { AddMemberForm } from '../features/members/components/add-member-form';
 import { MemberList } from '../features/members/components/member-list';
 import { projectsQueryKey } from '../features/projects/api/get-projects';
@@ -45,6 +47,19 @@ export function ProjectMembersRoute() {
           />
         )}
       </section>
+      {canManage && (
+        <section
+          aria-labelledby="invite-title"
+          className="space-y-4 rounded-xl border border-stone-200 bg-white p-6"
+        >
+          <h2 id="invite-title" className="text-lg font-semibold">
+            Invite by e-mail
+          </h2>
+          <InviteForm projectId={project.id} />
+          <h3 className="pt-2 text-base font-semibold">Waiting for an answer</h3>
+          <PendingInvitations projectId={project.id} />
+        </section>
+      )}
       {canManage && (
         <section
           aria-labelledby="add-member-title"

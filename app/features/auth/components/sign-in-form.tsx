@@ -1,5 +1,6 @@
 // E-mail and password sign-in; problems are shown beside the field they concern.
 import { useState, type FormEvent } from 'react';
+import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/form-field';
 import { FormAlert } from '../../../components/ui/status';
@@ -46,6 +47,11 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         onChange={(e) => setPassword(e.target.value)}
         error={errors.password}
       />
+      <p className="-mt-2 text-right text-sm">
+        <Link to="/forgot-password" className="text-accent-700 underline underline-offset-2">
+          Forgot password?
+        </Link>
+      </p>
       <Button type="submit" variant="primary" busy={signIn.isPending} className="w-full">
         {signIn.isPending ? 'Signing in…' : 'Sign in'}
       </Button>
