@@ -1,4 +1,5 @@
-// Every saved revision of a figure, newest first, with who saved it, when and their note.
+// Every saved revision of a figure, newest first, with who saved it, when, their note and which
+// fields changed against the revision before.
 // A revision can be opened to read what it held, compare it with the latest and restore it.
 import { Fragment, useEffect, useRef, useState } from 'react';
 import { Button } from '../../../components/ui/button';
@@ -6,6 +7,7 @@ import { ErrorPanel, Loading } from '../../../components/ui/status';
 import { formatDateTime } from '../../../utils/format-date';
 import { useRevisions } from '../api/get-revisions';
 import type { Figure } from '../../../../shared/api/schemas';
+import { describeChanges } from '../utils/changed-fields';
 import { RevisionDetails } from './revision-details';
 
 interface RevisionListProps {
@@ -34,6 +36,7 @@ export function RevisionList({ figure, canEdit }: RevisionListProps) {
 
   const rows = [...revisions.data].sort((a, b) => b.revision - a.revision);
   const latestSpecHash = rows.find((r) => r.revision === currentRevision)?.specHash;
+  const oldest = rows.at(-1)?.revision;
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-sm">
@@ -51,6 +54,9 @@ export function RevisionList({ figure, canEdit }: RevisionListProps) {
             </th>
             <th scope="col" className="py-2 pr-3 font-semibold">
               Note
+            </th>
+            <th scope="col" className="py-2 pr-3 font-semibold">
+              What changed
             </th>
             <th scope="col" className="py-2 font-semibold">
               <span className="sr-only">Details</span>
@@ -75,6 +81,9 @@ export function RevisionList({ figure, canEdit }: RevisionListProps) {
                 <td className="py-2 pr-3 text-stone-700">
                   {r.message || <span className="text-stone-500">—</span>}
                 </td>
+                <td className="py-2 pr-3 text-stone-700">
+                  {describeChanges(r.changedFields, r.revision === oldest)}
+                </td>
                 <td className="py-2 text-right">
                   <Button
                     size="sm"
@@ -90,7 +99,7 @@ export function RevisionList({ figure, canEdit }: RevisionListProps) {
               </tr>
               {open === r.revision && (
                 <tr id={`revision-${r.revision}`} className="border-b border-stone-100 bg-stone-50">
-                  <td colSpan={5} className="p-4">
+                  <td colSpan={6} className="p-4">
                     <RevisionDetails
                       figure={figure}
                       revision={r.revision}
