@@ -1,8 +1,8 @@
 // /projects/:projectId: the project's figures, and (for editors) a way to add one. While some
-// figures' print files are out of date (e.g. after a house-style change the server re-renders them in
-// the background) the list is fetched again every few seconds.
+// figures' print files are out of date (after a house-style change the server re-renders them in
+// the background) the list is fetched again every few seconds, until nothing has changed for a while.
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { useNavigate } from 'react-router';
 import { roleAllows } from '../../shared/api/roles';
 import { Button } from '../components/ui/button';
@@ -15,13 +15,25 @@ import { projectsQueryKey } from '../features/projects/api/get-projects';
 import { useProjectFromLayout } from './project-layout';
 
 const OUT_OF_DATE_POLL_MS = 4000;
+/** Figures that were never rendered stay out of date until exported: stop asking after a while. */
+const GIVE_UP_AFTER_MS = 3 * 60_000;
 
 export function ProjectFiguresRoute() {
   const project = useProjectFromLayout();
+  // Which figures were out of date at the last answer, and since when that list has not changed.
+  const progress = useRef({ outOfDate: '', since: 0 });
   const figures = useQuery({
     ...getFiguresQueryOptions(project.id),
-    refetchInterval: (query) =>
-      query.state.data?.some((f) => !f.printFilesCurrent) ? OUT_OF_DATE_POLL_MS : false,
+    refetchInterval: (query) => {
+      const outOfDate = (query.state.data ?? [])
+        .filter((f) => !f.printFilesCurrent)
+        .map((f) => f.id)
+        .join(',');
+      const now = Date.now();
+      if (outOfDate !== progress.current.outOfDate) progress.current = { outOfDate, since: now };
+      if (!outOfDate || now - progress.current.since > GIVE_UP_AFTER_MS) return false;
+      return OUT_OF_DATE_POLL_MS;
+    },
   });
   const outOfDate = figures.data?.filter((f) => !f.printFilesCurrent).length ?? 0;
   const [creating, setCreating] = useState(false);
@@ -50,8 +62,7 @@ export function ProjectFiguresRoute() {
           {outOfDate > 0 && (
             <p className="text-sm text-stone-600">
               Print files of {outOfDate} {outOfDate === 1 ? 'figure are' : 'figures are'} out of
-              date (not yet rendered for the current spec and house style); this list checks again
-              every few seconds.
+              date: not rendered for the figure’s current spec and house style yet.
             </p>
           )}
           <FigureTable

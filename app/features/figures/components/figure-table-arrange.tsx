@@ -141,7 +141,7 @@ export function FigureTableArrange({ projectId, figures, onDone }: ArrangeProps)
           onChange={(e) => setPrefix(e.target.value)}
           error={prefixError}
           hint="Numbers the list in its current order."
-          className="w-40"
+          className="w-64"
         />
         <Button onClick={renumber} className="mb-5">
           {helperLabel}

@@ -31,7 +31,7 @@ export function CommentForm({ figureId, parentId, label, submitLabel, onDone }: 
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-2" aria-label={label}>
+    <form onSubmit={onSubmit} noValidate className="space-y-2">
       <FormAlert message={formErrorMessage(create.error, ['body'])} />
       <TextAreaField
         label={label}

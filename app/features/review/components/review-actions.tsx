@@ -58,7 +58,7 @@ export function ReviewActions({ actions, revision, mutation }: ReviewActionsProp
         label="Note with the status change"
         hint={
           actions.includes('request_changes')
-            ? 'Required when requesting changes: say what should change.'
+            ? 'Required to request changes, optional otherwise.'
             : 'Optional.'
         }
         value={note}

@@ -49,7 +49,7 @@ export function ReviewHistory({ figureId, statusNames }: ReviewHistoryProps) {
               </th>
               <td className="py-1.5 pr-3">
                 {statusNames[e.fromStatus]} <span aria-hidden="true">→</span>
-                <span className="sr-only">to</span> {statusNames[e.toStatus]}
+                <span className="sr-only"> to</span> {statusNames[e.toStatus]}
               </td>
               <td className="py-1.5 pr-3 text-right tabular-nums">{e.revision}</td>
               <td className="py-1.5 whitespace-pre-line text-stone-700">{e.note || '—'}</td>
