@@ -18,6 +18,7 @@ import { projectRoutes } from './routes/projects';
 import { reviewRoutes } from './routes/review';
 import { exportRoutes, projectExportRoutes } from './routes/exports';
 import { figureBundleRoutes, projectBundleRoutes } from './routes/bundles';
+import { datasetRoutes, projectDatasetRoutes } from './routes/datasets';
 import { invitationRoutes } from './routes/invitations';
 import { accountRoutes } from './routes/account';
 import { createMailer, type Mailer } from './mail/mailer';
@@ -80,6 +81,8 @@ export function createApp({ env, db, mailer = createMailer(env), jobs }: AppDeps
   app.use('/api/projects', projectRoutes(db, jobs?.enqueueRerender ?? null));
   app.use('/api/projects', projectExportRoutes(db, jobs?.enqueueExport ?? null));
   app.use('/api/projects', projectBundleRoutes(db));
+  app.use('/api/projects', projectDatasetRoutes(db));
+  app.use('/api/datasets', datasetRoutes(db));
   app.use('/api/exports', exportRoutes(db));
   app.use('/api/figures', figureRoutes(db));
   app.use('/api/figures', reviewRoutes(db, env, mailer));

@@ -1,11 +1,12 @@
 // Lobewright bundles and figure copies: GET …/bundle downloads, POST /api/projects/import (new
 // project), POST /api/projects/:projectId/import (into a project), POST /api/figures/:figureId/copy.
-import { Router, type RequestHandler, type Response } from 'express';
+import { Router, type Response } from 'express';
 import type { Knex } from 'knex';
 import { z } from 'zod';
 import { copyFigureBody, MAX_BUNDLE_BYTES, type LobewrightBundle } from '../../shared/api/bundle';
 import { idParam } from '../../shared/api/schemas';
-import { AppError, notFound } from '../lib/app-error';
+import { AppError } from '../lib/app-error';
+import { mayEditProject } from '../middleware/may-edit-project';
 import { currentUser, requireUser } from '../middleware/require-user';
 import { singleFileUpload } from '../middleware/upload';
 import { validated } from '../middleware/validate';
@@ -27,20 +28,6 @@ function sendBundle(res: Response, bundle: LobewrightBundle, stem: string): void
     .type('application/json')
     .set('Content-Disposition', `attachment; filename="${safe}.lobewright.json"`)
     .send(JSON.stringify(bundle, null, 2) + '\n');
-}
-
-/** Checks the role before the upload is read, so outsiders never get to send a file. */
-function mayEditProject(db: Knex): RequestHandler {
-  return async (req, _res, next) => {
-    const id = idParam.safeParse(req.params.projectId);
-    if (!id.success) return next(notFound('project'));
-    try {
-      await authoriseProject(db, currentUser(req), id.data, 'edit');
-      next();
-    } catch (err) {
-      next(err);
-    }
-  };
 }
 
 function uploadedBytes(req: { file?: Express.Multer.File }): Buffer {

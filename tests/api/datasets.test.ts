@@ -1,0 +1,148 @@
+// Uploaded radial data: CSV upload with units converted to atomic units (CODATA 2022 a0 =
+// 52.9177210544 pm, /work/shared/REFERENCE.md "Bohr radius"), line-numbered refusals that store
+// nothing, role checks on every route, and a radial figure drawing a data set.
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { datasetSchema, datasetSummarySchema } from '../../shared/api/datasets';
+import { demo, signedIn, type ApiClient } from '../support/api-client';
+import { startTestServer, type TestServer } from '../support/test-server';
+
+const A0_PM = 52.9177210544;
+
+let server: TestServer;
+let owner: ApiClient, editor: ApiClient, reviewer: ApiClient, viewer: ApiClient, admin: ApiClient;
+let chapter4: number;
+
+beforeAll(async () => {
+  server = await startTestServer(inject('databaseUrl'));
+  [owner, editor, reviewer, viewer, admin] = await Promise.all(
+    [demo.owner, demo.editor, demo.reviewer, demo.viewer, demo.admin].map((e) =>
+      signedIn(server.baseUrl, e),
+    ),
+  );
+  chapter4 = (await owner.get('/api/projects')).body.find((p: { name: string }) =>
+    p.name.startsWith('Atoms & Bonds'),
+  ).id;
+});
+afterAll(async () => server.stop());
+
+const uploadCsv = (
+  c: ApiClient,
+  csv: string,
+  fields: Record<string, string> = { name: 'Hartree–Fock 2s' },
+  projectId = chapter4,
+) =>
+  c.upload(
+    `/api/projects/${projectId}/datasets`,
+    { field: 'file', name: 'data.csv', content: csv, type: 'text/csv' },
+    fields,
+  );
+
+const datasetRows = async () => Number((await server.db('datasets').count('* as n').first())?.n);
+
+/** Hydrogen 1s, R = 2e^(-r/a0)/a0^(3/2), tabulated in pm (R_10 of REFERENCE.md, Z = 1). */
+const onesPm = [0, 20, 40, 60, 80, 100, 150, 200, 300];
+const onesCsv = [
+  'r / pm, R / pm^-3/2',
+  ...onesPm.map((r) => `${r},${(2 * Math.exp(-r / A0_PM)) / Math.pow(A0_PM, 1.5)}`),
+].join('\n');
+
+describe('upload', () => {
+  it('when an editor uploads R in pm, then it is stored in bohr and bohr^-3/2 and the audit trail says so', async () => {
+    const r = await uploadCsv(editor, onesCsv, { name: 'Tabulated 1s' });
+    expect(r.status).toBe(201);
+    const d = datasetSchema.parse(r.body);
+    expect(d).toMatchObject({
+      name: 'Tabulated 1s',
+      quantity: 'R',
+      rUnit: 'pm',
+      valueUnit: 'pm^-3/2',
+      points: onesPm.length,
+      createdBy: 'Ravi Mendes',
+    });
+    d.r.forEach((rb, i) => {
+      expect(Math.abs(rb - onesPm[i] / A0_PM)).toBeLessThan(1e-15 * Math.max(1, rb));
+      expect(Math.abs(d.values[i] - 2 * Math.exp(-rb)) / (2 * Math.exp(-rb))).toBeLessThan(1e-14);
+    });
+    expect(d.rMaxBohr).toBeCloseTo(300 / A0_PM, 14);
+    const audit = await server
+      .db('audit_entries')
+      .where({ project_id: chapter4, action: 'dataset.uploaded' })
+      .orderBy('id');
+    expect(audit.at(-1).summary).toMatch(/"Tabulated 1s" \(R, 9 points, pm \/ pm\^-3\/2\)/);
+  });
+
+  it('when the header has no units, then the form fields give them', async () => {
+    const r = await uploadCsv(
+      editor,
+      'r,V\n1,-27.211386245981\n2,-13.6056931229905\n4,-6.80284656149525\n',
+      {
+        name: 'Coulomb in eV',
+        rUnit: 'bohr',
+        valueUnit: 'eV',
+      },
+    );
+    expect(r.status).toBe(201);
+    expect(r.body.values[0]).toBeCloseTo(-1, 14);
+  });
+
+  it('when rows are bad, then 422 lists each problem with its line and nothing is stored', async () => {
+    const before = await datasetRows();
+    const r = await uploadCsv(editor, 'r_bohr,R_bohr^-3/2\n0,1\n1,NaN\n0.5,2\n');
+    expect(r.status).toBe(422);
+    expect(r.body.error.code).toBe('invalid_csv');
+    expect(r.body.error.fields.file).toBe('line 3: R "NaN" is not a finite decimal number');
+    expect(r.body.error.details.problems).toEqual([
+      { line: 3, field: 'file', message: 'R "NaN" is not a finite decimal number' },
+      { line: 4, field: 'file', message: 'r must increase from row to row, but 0.5 follows 1' },
+    ]);
+    const units = await uploadCsv(editor, 'r,R\n0,1\n1,2\n2,3\n');
+    expect(units.status).toBe(422);
+    expect(Object.keys(units.body.error.fields).sort()).toEqual(['rUnit', 'valueUnit']);
+    expect(await datasetRows()).toBe(before);
+  });
+
+  it('when the name or the file is missing, or the file is too large, then the field is named and nothing is stored', async () => {
+    const before = await datasetRows();
+    const noName = await uploadCsv(editor, onesCsv, { name: ' ' });
+    expect(noName.status).toBe(400);
+    expect(noName.body.error.fields.name).toBe('give the data set a name');
+    const noFile = await editor.post(`/api/projects/${chapter4}/datasets`, { name: 'x' });
+    expect(noFile.status).toBe(400);
+    expect(noFile.body.error.fields.file).toMatch(/choose a CSV file/);
+    const big = await uploadCsv(editor, 'r_bohr,R_bohr^-3/2\n' + '1,1\n'.repeat(600_000));
+    expect(big.status).toBe(413);
+    expect(big.body.error.message).toBe('the CSV file is larger than 2 MB; nothing was changed');
+    expect(await datasetRows()).toBe(before);
+  });
+});
+
+describe('roles', () => {
+  it('when a viewer or reviewer uploads, then 403; outsiders get 404 on every route', async () => {
+    const before = await datasetRows();
+    expect((await uploadCsv(viewer, onesCsv)).status).toBe(403);
+    expect((await uploadCsv(reviewer, onesCsv)).status).toBe(403);
+    expect((await uploadCsv(admin, onesCsv)).status).toBe(404);
+    expect(await datasetRows()).toBe(before);
+    const id = (await viewer.get(`/api/projects/${chapter4}/datasets`)).body[0].id;
+    expect((await admin.get(`/api/projects/${chapter4}/datasets`)).status).toBe(404);
+    expect((await admin.get(`/api/datasets/${id}`)).status).toBe(404);
+    expect((await admin.delete(`/api/datasets/${id}`)).status).toBe(404);
+    expect((await viewer.delete(`/api/datasets/${id}`)).status).toBe(403);
+    expect((await reviewer.delete(`/api/datasets/${id}`)).status).toBe(403);
+    expect(await datasetRows()).toBe(before);
+  });
+
+  it('when a viewer lists and opens data sets, then the list has no points and the data set has them', async () => {
+    const list = (await viewer.get(`/api/projects/${chapter4}/datasets`)).body;
+    expect(list.length).toBeGreaterThanOrEqual(2);
+    const first = datasetSummarySchema.strict().parse(list[0]);
+    const one = datasetSchema.parse((await viewer.get(`/api/datasets/${first.id}`)).body);
+    expect(one.r).toHaveLength(first.points);
+  });
+
+  it('when an editor deletes a data set, then it is gone', async () => {
+    const id = (await uploadCsv(editor, onesCsv, { name: 'Temporary' })).body.id;
+    expect((await editor.delete(`/api/datasets/${id}`)).status).toBe(204);
+    expect((await viewer.get(`/api/datasets/${id}`)).status).toBe(404);
+  });
+});
