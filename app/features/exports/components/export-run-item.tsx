@@ -72,7 +72,7 @@ export function ExportRunItem({ run: listed }: { run: ExportRun }) {
           >
             <div
               className={cn(
-                'h-full rounded-full transition-[width] duration-500',
+                'h-full rounded-full',
                 run.status === 'failed' ? 'bg-red-600' : 'bg-accent-600',
               )}
               style={{ width: `${percent}%` }}
