@@ -27,7 +27,13 @@ interface Figure3dPreviewProps {
   onViewChange?: (view: View) => void;
 }
 
-export function Figure3dPreview({ spec, figure, canEdit, viewOnlyChange, onViewChange }: Figure3dPreviewProps) {
+export function Figure3dPreview({
+  spec,
+  figure,
+  canEdit,
+  viewOnlyChange,
+  onViewChange,
+}: Figure3dPreviewProps) {
   // Joins the viewport's request (same cache key), to say when the figure on screen is the one asked for.
   const geometry = useOrbitalGeometry(spec);
   const turned = canonicalJson(spec.view) !== canonicalJson(figure.spec.view);
@@ -40,9 +46,12 @@ export function Figure3dPreview({ spec, figure, canEdit, viewOnlyChange, onViewC
             ? `3D figure failed: ${geometry.error ?? ''}`
             : `Computing the 3D figure: ${Math.round(100 * geometry.progress)} %`}
       </p>
-      <Suspense fallback={<Loading label="Loading the 3D view…" />}>
-        <OrbitalViewport spec={spec} onViewChange={onViewChange} />
-      </Suspense>
+      {/* Its own stacking layer: the figure's axis labels stay under menus that open over it. */}
+      <div className="isolate">
+        <Suspense fallback={<Loading label="Loading the 3D view…" />}>
+          <OrbitalViewport spec={spec} onViewChange={onViewChange} />
+        </Suspense>
+      </div>
       {canEdit && viewOnlyChange && turned && onViewChange ? (
         <SaveViewBar
           figure={figure}

@@ -19,13 +19,18 @@ describe('the figure composer', () => {
   let problems: string[];
 
   const ready3d = (text: RegExp) =>
-    page.locator('[data-figure-ready="true"]').filter({ hasText: text }).waitFor({ timeout: 60_000 });
+    page
+      .locator('[data-figure-ready="true"]')
+      .filter({ hasText: text })
+      .waitFor({ timeout: 60_000 });
   const readout = () => page.getByRole('region', { name: 'Read-out' });
 
   beforeAll(async () => {
     stack = await startStack();
     browser = await launchChromium();
-    page = await (await browser.newContext({ viewport: { width: 1360, height: 1000 }, acceptDownloads: true })).newPage();
+    page = await (
+      await browser.newContext({ viewport: { width: 1360, height: 1000 }, acceptDownloads: true })
+    ).newPage();
     problems = watchForProblems(page);
     await signIn(page, stack.baseUrl, 'ravi.mendes@harrowgate.example');
     await page.getByRole('link', { name: PROJECT }).click();
@@ -42,7 +47,10 @@ describe('the figure composer', () => {
     await ready3d(/3D figure ready: 3d_z²/);
     expect(await page.getByLabel('n (shell)').inputValue()).toBe('3');
     expect(await page.getByLabel('l (subshell)').inputValue()).toBe('2');
-    const orbitalOptions = await page.getByRole('combobox', { name: 'Orbital', exact: true }).locator('option').allTextContents();
+    const orbitalOptions = await page
+      .getByRole('combobox', { name: 'Orbital', exact: true })
+      .locator('option')
+      .allTextContents();
     expect(orbitalOptions).toHaveLength(5);
     expect(orbitalOptions[0]).toMatch(/^3dz² \(m = 0\)$/);
     await readout().getByRole('rowheader', { name: '3dz²' }).waitFor();
@@ -54,7 +62,9 @@ describe('the figure composer', () => {
     await page.getByLabel('n (shell)').selectOption('4');
     await page.getByLabel('l (subshell)').selectOption('3');
     // m stays 0: the orbital is 4f_z³, and the list offers the seven f orbitals by name.
-    expect(await page.getByRole('combobox', { name: 'Orbital', exact: true }).locator('option').count()).toBe(7);
+    expect(
+      await page.getByRole('combobox', { name: 'Orbital', exact: true }).locator('option').count(),
+    ).toBe(7);
     await ready3d(/3D figure ready: 4f_z³/);
     const row = readout().getByRole('row', { name: /4fz³/ });
     await row.waitFor();
@@ -84,14 +94,19 @@ describe('the figure composer', () => {
     await page.getByRole('button', { name: 'Save figure as revision 2' }).click();
     await page.getByRole('status').filter({ hasText: 'Figure saved as revision 2.' }).waitFor();
     await page.getByText('Revision 2, no unsaved changes').waitFor();
-    await page.getByRole('region', { name: 'Revisions' }).getByRole('cell', { name: '4f instead of 3d' }).waitFor();
+    await page
+      .getByRole('region', { name: 'Revisions' })
+      .getByRole('cell', { name: '4f instead of 3d' })
+      .waitFor();
   });
 
   it('when the editor asks what will print, then the saved PNG is shown at its size with its pixels and dpi', async () => {
     await page.getByRole('button', { name: 'Show what will print' }).click();
     const image = page.getByRole('img', { name: 'Revision 2 as it will print' });
     await image.waitFor({ timeout: 90_000 });
-    await page.getByText(/Revision 2: 84 × 84 mm at 300 dpi, 992 × 992 px\./).waitFor({ timeout: 30_000 });
+    await page
+      .getByText(/Revision 2: 84 × 84 mm at 300 dpi, 992 × 992 px\./)
+      .waitFor({ timeout: 30_000 });
     await image.scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'composer-what-will-print');
   });
@@ -101,7 +116,10 @@ describe('the figure composer', () => {
     const menu = page.getByRole('menu', { name: 'Download revision 2' });
     await menu.waitFor();
     await saveScreenshot(page, 'composer-download-menu');
-    const responseWait = page.waitForResponse((r) => r.url().includes('/render?format=pdf&revision=2'), { timeout: 90_000 });
+    const responseWait = page.waitForResponse(
+      (r) => r.url().includes('/render?format=pdf&revision=2'),
+      { timeout: 90_000 },
+    );
     const downloadWait = page.waitForEvent('download', { timeout: 90_000 });
     await menu.getByRole('menuitem', { name: /^PDF/ }).click();
     const response = await responseWait;
@@ -111,18 +129,50 @@ describe('the figure composer', () => {
     expect(download.suggestedFilename()).toMatch(/\.pdf$/);
     const saved = await readFile((await download.path())!);
     expect(saved.subarray(0, 5).toString('latin1')).toBe('%PDF-');
-    await page.getByRole('status').filter({ hasText: /^Downloaded .*\.pdf\./ }).waitFor();
+    await page
+      .getByRole('status')
+      .filter({ hasText: /^Downloaded .*\.pdf\./ })
+      .waitFor();
   });
 
   it('when the kind becomes a radial plot, then the 2D figure is drawn in the browser with its values', async () => {
     await page.getByRole('tab', { name: 'Figure' }).click();
     await page.getByLabel('Kind of figure').selectOption('radial');
-    await page.locator('[data-figure-ready="true"]').filter({ hasText: /Figure ready/ }).waitFor({ timeout: 30_000 });
+    await page
+      .locator('[data-figure-ready="true"]')
+      .filter({ hasText: /Figure ready/ })
+      .waitFor({ timeout: 30_000 });
     await page.getByRole('region', { name: 'Preview' }).locator('svg').first().waitFor();
-    await readout().getByRole('group', { name: 'Values printed in the figure' }).or(readout().locator('dl')).first().waitFor();
+    await readout()
+      .getByRole('group', { name: 'Values printed in the figure' })
+      .or(readout().locator('dl'))
+      .first()
+      .waitFor();
     await saveScreenshot(page, 'composer-radial');
     await page.keyboard.press('Control+Z');
     await ready3d(/3D figure ready: 4f_z³/);
     expect(problems).toEqual([]);
+  });
+
+  it('when a viewer opens the figure, then the composer is read-only but downloads remain', async () => {
+    const viewer = await (
+      await browser.newContext({ viewport: { width: 1360, height: 1000 } })
+    ).newPage();
+    const viewerProblems = watchForProblems(viewer);
+    await signIn(viewer, stack.baseUrl, 'tomas.reyes@fennwick.example');
+    await viewer.getByRole('link', { name: PROJECT }).click();
+    await viewer.getByRole('link', { name: /^The 3d_z² orbital$|^The 3dz² orbital$/ }).click();
+    await viewer
+      .getByText('Read-only: you can look at this figure and download it, but not change it.')
+      .waitFor();
+    await viewer
+      .locator('[data-figure-ready="true"]')
+      .filter({ hasText: /4f_z³/ })
+      .waitFor({ timeout: 60_000 });
+    expect(await viewer.getByLabel('n (shell)').isDisabled()).toBe(true);
+    expect(await viewer.getByRole('button', { name: /^(Undo|Redo|Save figure)/ }).count()).toBe(0);
+    await viewer.getByRole('button', { name: 'Download' }).waitFor();
+    await saveScreenshot(viewer, 'composer-viewer');
+    expect(viewerProblems).toEqual([]);
   });
 });

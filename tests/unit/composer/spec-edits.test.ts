@@ -24,7 +24,10 @@ import {
   setWeight,
 } from '../../../app/features/composer/utils/spec-edits';
 import { FIGURE_PRESETS } from '../../../app/features/composer/utils/figure-presets';
-import { applyHouseStyle, houseStyleOverrides } from '../../../app/features/composer/utils/house-style-overrides';
+import {
+  applyHouseStyle,
+  houseStyleOverrides,
+} from '../../../app/features/composer/utils/house-style-overrides';
 import { pixelsFor } from '../../../app/features/composer/utils/print-size';
 import { defaultHouseStyle } from '../../../shared/spec/house-style';
 
@@ -95,15 +98,21 @@ describe('quantum numbers in the composer', () => {
 });
 
 describe('the real-orbital picker', () => {
-  it.each([0, 1, 2, 3, 4, 7])('when l = %i, then it offers exactly 2l + 1 distinct orbitals', (l) => {
-    const choices = orbitalChoices(l, 'real');
-    expect(choices).toHaveLength(2 * l + 1);
-    expect(new Set(choices.map((c) => c.label.text)).size).toBe(2 * l + 1);
-    expect(new Set(choices.map((c) => c.m)).size).toBe(2 * l + 1);
-  });
+  it.each([0, 1, 2, 3, 4, 7])(
+    'when l = %i, then it offers exactly 2l + 1 distinct orbitals',
+    (l) => {
+      const choices = orbitalChoices(l, 'real');
+      expect(choices).toHaveLength(2 * l + 1);
+      expect(new Set(choices.map((c) => c.label.text)).size).toBe(2 * l + 1);
+      expect(new Set(choices.map((c) => c.m)).size).toBe(2 * l + 1);
+    },
+  );
 
   it('when l = 1, 2, 3, then the names are the conventional ones (common practice)', () => {
-    const names = (l: number) => orbitalChoices(l, 'real').map((c) => c.label.text).sort();
+    const names = (l: number) =>
+      orbitalChoices(l, 'real')
+        .map((c) => c.label.text)
+        .sort();
     expect(names(1)).toEqual(['p_x', 'p_y', 'p_z']);
     expect(names(2)).toEqual(['d_x²−y²', 'd_xy', 'd_xz', 'd_yz', 'd_z²'].sort());
     expect(names(3)).toEqual(
@@ -120,7 +129,13 @@ describe('figure kinds, curves and transitions', () => {
 
   it('when the kind becomes a radial plot, then it draws r²R² of each shell in the state', () => {
     const s = changeKind(addTerm(spec(2, 1, 0)), 'radial');
-    expect(s.kind).toMatchObject({ type: 'radial', curves: [{ n: 2, l: 1, quantity: 'r2R2' }, { n: 2, l: 0 }] });
+    expect(s.kind).toMatchObject({
+      type: 'radial',
+      curves: [
+        { n: 2, l: 1, quantity: 'r2R2' },
+        { n: 2, l: 0 },
+      ],
+    });
   });
 
   it('when a radial curve gets n below its l, then l follows', () => {
@@ -137,15 +152,22 @@ describe('figure kinds, curves and transitions', () => {
     valid(s);
   });
 
-  it.each(FIGURE_PRESETS.map((p) => [p.name, p] as const))('preset "%s" gives a valid spec', (_, p) => {
-    const s = p.apply(spec(1, 0, 0));
-    valid(s);
-  });
+  it.each(FIGURE_PRESETS.map((p) => [p.name, p] as const))(
+    'preset "%s" gives a valid spec',
+    (_, p) => {
+      const s = p.apply(spec(1, 0, 0));
+      valid(s);
+    },
+  );
 });
 
 describe('house style and print size', () => {
   it('when a figure sets its own colour and width, then both are listed and applying the house style clears them', () => {
-    const s: FigureSpec = { ...spec(2, 1, 0), look: { positiveColour: '#112233' }, print: { widthMm: 174 } };
+    const s: FigureSpec = {
+      ...spec(2, 1, 0),
+      look: { positiveColour: '#112233' },
+      print: { widthMm: 174 },
+    };
     const list = houseStyleOverrides(s, defaultHouseStyle);
     expect(list.map((o) => o.field)).toEqual(['positiveColour', 'widthMm']);
     expect(list[1]).toMatchObject({ figureValue: '174 mm', houseValue: '84 mm' });

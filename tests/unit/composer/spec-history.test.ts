@@ -20,8 +20,14 @@ const base: FigureSpec = figureSpecSchema.parse({
   kind: { type: 'isosurface' },
 });
 
-const run = (h: SpecHistory, ...actions: SpecHistoryAction[]) => actions.reduce(specHistoryReducer, h);
-const edit = (spec: FigureSpec, field: string, at: number): SpecHistoryAction => ({ type: 'edit', spec, field, at });
+const run = (h: SpecHistory, ...actions: SpecHistoryAction[]) =>
+  actions.reduce(specHistoryReducer, h);
+const edit = (spec: FigureSpec, field: string, at: number): SpecHistoryAction => ({
+  type: 'edit',
+  spec,
+  field,
+  at,
+});
 const n = (h: SpecHistory) => h.present.state.terms[0].n;
 
 describe('composer undo and redo', () => {
@@ -78,7 +84,12 @@ describe('composer undo and redo', () => {
 
   it('when a save is loaded keeping the edits, then the edits count as saved but can still be undone', () => {
     const a = setQuantumNumber(base, 0, 'n', 4);
-    const h = run(startHistory(base, 1), edit(a, 'n', 0), { type: 'load', spec: a, revision: 2, keepEdits: true });
+    const h = run(startHistory(base, 1), edit(a, 'n', 0), {
+      type: 'load',
+      spec: a,
+      revision: 2,
+      keepEdits: true,
+    });
     expect(hasUnsavedChanges(h)).toBe(false);
     expect(h.savedRevision).toBe(2);
     expect(canUndo(h)).toBe(true);
@@ -86,7 +97,11 @@ describe('composer undo and redo', () => {
 
   it('when another revision is loaded, then history starts again from it', () => {
     const a = setQuantumNumber(base, 0, 'n', 4);
-    const h = run(startHistory(base, 1), edit(a, 'n', 0), { type: 'load', spec: base, revision: 3 });
+    const h = run(startHistory(base, 1), edit(a, 'n', 0), {
+      type: 'load',
+      spec: base,
+      revision: 3,
+    });
     expect(canUndo(h)).toBe(false);
     expect(h.present).toBe(base);
     expect(h.savedRevision).toBe(3);

@@ -34,7 +34,8 @@ export function renderUrl(figureId: number, r: RenderRequest): string {
 export function parseNotesHeader(header: string | null): string[] {
   if (!header) return [];
   const parsed = notesSchema.safeParse(JSON.parse(decodeURIComponent(header)));
-  if (!parsed.success) throw new ApiError(0, 'unexpected_response', 'X-Lobewright-Notes: not a list of notes');
+  if (!parsed.success)
+    throw new ApiError(0, 'unexpected_response', 'X-Lobewright-Notes: not a list of notes');
   return parsed.data;
 }
 
@@ -43,26 +44,50 @@ function filenameOf(disposition: string | null, fallback: string): string {
   return match ? match[1] : fallback;
 }
 
-export async function getRender(figureId: number, r: RenderRequest, signal?: AbortSignal): Promise<RenderedFile> {
+export async function getRender(
+  figureId: number,
+  r: RenderRequest,
+  signal?: AbortSignal,
+): Promise<RenderedFile> {
   const response = await fetch(renderUrl(figureId, r), { credentials: 'same-origin', signal });
   if (!response.ok) {
     const body = apiErrorSchema.safeParse(await response.json().catch(() => null));
     if (body.success)
-      throw new ApiError(response.status, body.data.error.code, body.data.error.message, body.data.error.fields ?? {});
-    throw new ApiError(response.status, 'render_failed', `The print file could not be made (HTTP ${response.status}).`);
+      throw new ApiError(
+        response.status,
+        body.data.error.code,
+        body.data.error.message,
+        body.data.error.fields ?? {},
+      );
+    throw new ApiError(
+      response.status,
+      'render_failed',
+      `The print file could not be made (HTTP ${response.status}).`,
+    );
   }
   const contentType = response.headers.get('content-type') ?? 'application/octet-stream';
   return {
     blob: await response.blob(),
     contentType,
-    filename: filenameOf(response.headers.get('content-disposition'), `figure-${figureId}.${r.format}`),
+    filename: filenameOf(
+      response.headers.get('content-disposition'),
+      `figure-${figureId}.${r.format}`,
+    ),
     notes: parseNotesHeader(response.headers.get('x-lobewright-notes')),
   };
 }
 
 export function getRenderQueryOptions(figureId: number, r: RenderRequest) {
   return queryOptions({
-    queryKey: ['figures', 'render', figureId, r.revision, r.format, Boolean(r.cmyk), Boolean(r.download)] as const,
+    queryKey: [
+      'figures',
+      'render',
+      figureId,
+      r.revision,
+      r.format,
+      Boolean(r.cmyk),
+      Boolean(r.download),
+    ] as const,
     queryFn: ({ signal }) => getRender(figureId, r, signal),
     // A revision's print file never changes unless the house style does; keep it a while.
     staleTime: 5 * 60_000,

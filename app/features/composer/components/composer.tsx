@@ -7,7 +7,10 @@ import { Button } from '../../../components/ui/button';
 import type { Figure } from '../../../../shared/api/schemas';
 import type { FigureSpec } from '../../../../shared/spec/figure-spec';
 import type { HouseStyle } from '../../../../shared/spec/house-style';
-import { resolveFigureSpec, type ResolvedFigureSpec } from '../../../../shared/spec/resolve-figure-spec';
+import {
+  resolveFigureSpec,
+  type ResolvedFigureSpec,
+} from '../../../../shared/spec/resolve-figure-spec';
 import { useFigureScene } from '../hooks/use-figure-scene';
 import { useSpecHistory } from '../hooks/use-spec-history';
 import { isThreeDimensional } from '../utils/figure-dimensions';
@@ -49,11 +52,28 @@ export interface ComposerProps {
 type Notice = { kind: 'saved'; revision: number } | { kind: 'error'; message: string } | null;
 
 function errorCode(error: unknown): string | null {
-  return typeof error === 'object' && error !== null && 'code' in error && typeof error.code === 'string' ? error.code : null;
+  return typeof error === 'object' &&
+    error !== null &&
+    'code' in error &&
+    typeof error.code === 'string'
+    ? error.code
+    : null;
 }
 
-export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, duplicate, render3d }: ComposerProps) {
-  const { history, dirty, edit, undo, redo, load } = useSpecHistory(figure.spec, figure.revision, canEdit);
+export function Composer({
+  figure,
+  houseStyle,
+  canEdit,
+  readOnlyReason,
+  save,
+  duplicate,
+  render3d,
+}: ComposerProps) {
+  const { history, dirty, edit, undo, redo, load } = useSpecHistory(
+    figure.spec,
+    figure.revision,
+    canEdit,
+  );
   const [tab, setTab] = useState('orbital');
   const [message, setMessage] = useState('');
   const [busy, setBusy] = useState<'save' | 'duplicate' | null>(null);
@@ -78,7 +98,10 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
   const flat = useFigureScene(threeD ? null : resolved);
   const facts = useMemo(() => stateFacts(deferred), [deferred]);
   const overrides = useMemo(() => houseStyleOverrides(spec, houseStyle), [spec, houseStyle]);
-  const savedResolved = useMemo(() => resolveFigureSpec(history.saved, houseStyle), [history.saved, houseStyle]);
+  const savedResolved = useMemo(
+    () => resolveFigureSpec(history.saved, houseStyle),
+    [history.saved, houseStyle],
+  );
   const pending = deferred !== spec || flat.status === 'working';
 
   async function doSave(base: number) {
@@ -92,7 +115,10 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
     } catch (error) {
       // A stale save shows the notice about the newer revision once the page has fetched it.
       if (errorCode(error) !== 'stale_revision')
-        setNotice({ kind: 'error', message: error instanceof Error ? error.message : String(error) });
+        setNotice({
+          kind: 'error',
+          message: error instanceof Error ? error.message : String(error),
+        });
     } finally {
       setBusy(null);
     }
@@ -109,26 +135,75 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
     }
   }
 
-  const onViewChange = canEdit ? (view: FigureSpec['view']) => edit({ ...spec, view }, 'view') : undefined;
+  const onViewChange = canEdit
+    ? (view: FigureSpec['view']) => edit({ ...spec, view }, 'view')
+    : undefined;
   const viewOnlyChange = dirty && sameSpec({ ...spec, view: history.saved.view }, history.saved);
 
   const tabs = [
-    { id: 'orbital', label: 'Orbital', content: <OrbitalControls spec={spec} onEdit={edit} readOnly={readOnly} /> },
-    { id: 'figure', label: 'Figure', content: <KindControls spec={spec} onEdit={edit} readOnly={readOnly} /> },
-    { id: 'camera', label: 'Camera', content: <ViewControls spec={spec} onEdit={edit} readOnly={readOnly} threeDimensional={isThreeDimensional(spec.kind)} /> },
-    { id: 'look', label: 'Look', content: <LookControls spec={spec} houseStyle={houseStyle} onEdit={edit} readOnly={readOnly} /> },
-    { id: 'print', label: 'Print', content: <PrintControls spec={spec} houseStyle={houseStyle} onEdit={edit} readOnly={readOnly} /> },
+    {
+      id: 'orbital',
+      label: 'Orbital',
+      content: <OrbitalControls spec={spec} onEdit={edit} readOnly={readOnly} />,
+    },
+    {
+      id: 'figure',
+      label: 'Figure',
+      content: <KindControls spec={spec} onEdit={edit} readOnly={readOnly} />,
+    },
+    {
+      id: 'camera',
+      label: 'Camera',
+      content: (
+        <ViewControls
+          spec={spec}
+          onEdit={edit}
+          readOnly={readOnly}
+          threeDimensional={isThreeDimensional(spec.kind)}
+        />
+      ),
+    },
+    {
+      id: 'look',
+      label: 'Look',
+      content: (
+        <LookControls spec={spec} houseStyle={houseStyle} onEdit={edit} readOnly={readOnly} />
+      ),
+    },
+    {
+      id: 'print',
+      label: 'Print',
+      content: (
+        <PrintControls spec={spec} houseStyle={houseStyle} onEdit={edit} readOnly={readOnly} />
+      ),
+    },
   ];
 
   return (
     <div className="space-y-4">
-      <div className="flex flex-wrap items-center gap-2 border-b border-stone-200 pb-3" role="toolbar" aria-label="Figure actions">
+      <div
+        className="flex flex-wrap items-center gap-2 border-b border-stone-200 pb-3"
+        role="toolbar"
+        aria-label="Figure actions"
+      >
         {canEdit ? (
           <>
-            <Button size="sm" onClick={undo} disabled={!canUndo(history)} aria-keyshortcuts="Control+Z Meta+Z" title="Undo (Ctrl/⌘+Z)">
+            <Button
+              size="sm"
+              onClick={undo}
+              disabled={!canUndo(history)}
+              aria-keyshortcuts="Control+Z Meta+Z"
+              title="Undo (Ctrl/⌘+Z)"
+            >
               Undo
             </Button>
-            <Button size="sm" onClick={redo} disabled={!canRedo(history)} aria-keyshortcuts="Shift+Control+Z Shift+Meta+Z" title="Redo (Shift+Ctrl/⌘+Z)">
+            <Button
+              size="sm"
+              onClick={redo}
+              disabled={!canRedo(history)}
+              aria-keyshortcuts="Shift+Control+Z Shift+Meta+Z"
+              title="Redo (Shift+Ctrl/⌘+Z)"
+            >
               Redo
             </Button>
             <span className="mx-1 h-5 w-px bg-stone-300" aria-hidden="true" />
@@ -136,15 +211,20 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
         ) : null}
         <p className="mr-auto text-sm" aria-live="polite">
           {dirty ? (
-            <span className="rounded bg-amber-100 px-2 py-0.5 font-semibold text-amber-900">Unsaved changes</span>
+            <span className="rounded bg-amber-100 px-2 py-0.5 font-semibold text-amber-900">
+              Unsaved changes
+            </span>
           ) : (
-            <span className="text-stone-600">Revision {history.savedRevision}, no unsaved changes</span>
+            <span className="text-stone-600">
+              Revision {history.savedRevision}, no unsaved changes
+            </span>
           )}
         </p>
         <DownloadMenu figureId={figure.id} revision={history.savedRevision} unsaved={dirty} />
-        {canEdit ? (
+        {/* The page header duplicates the saved figure; this one carries the unsaved changes along. */}
+        {canEdit && dirty ? (
           <Button size="sm" onClick={() => void doDuplicate()} busy={busy === 'duplicate'}>
-            {dirty ? 'Duplicate with these changes' : 'Duplicate as a new figure'}
+            Duplicate with these changes
           </Button>
         ) : null}
       </div>
@@ -171,7 +251,7 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
       ) : null}
       {readOnly ? <p className="text-sm text-stone-700">{readOnlyReason}</p> : null}
 
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)]">
         <div className="space-y-4">
           {canEdit ? (
             <div className="flex items-end gap-2">
@@ -203,8 +283,16 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
               Preview
             </h3>
             {threeD ? null : (
-              <p role="status" data-figure-ready={!pending && flat.status === 'ready'} className="text-xs text-stone-600">
-                {pending ? 'Updating the preview…' : flat.status === 'ready' ? `Figure ready: ${flat.scene?.title ?? ''}` : ''}
+              <p
+                role="status"
+                data-figure-ready={!pending && flat.status === 'ready'}
+                className="text-xs text-stone-600"
+              >
+                {pending
+                  ? 'Updating the preview…'
+                  : flat.status === 'ready'
+                    ? `Figure ready: ${flat.scene?.title ?? ''}`
+                    : ''}
               </p>
             )}
           </div>
@@ -212,8 +300,17 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
             render3d(resolved, { onViewChange, viewOnlyChange })
           ) : (
             <div className="relative rounded border border-stone-200 bg-white p-2">
-              {flat.scene ? <FlatFigure svg={flat.scene.svg} /> : <p className="p-6 text-sm text-stone-600">Drawing…</p>}
-              {pending ? <div className="absolute inset-x-0 top-0 h-1 animate-pulse bg-accent-200" aria-hidden="true" /> : null}
+              {flat.scene ? (
+                <FlatFigure svg={flat.scene.svg} />
+              ) : (
+                <p className="p-6 text-sm text-stone-600">Drawing…</p>
+              )}
+              {pending ? (
+                <div
+                  className="absolute inset-x-0 top-0 h-1 animate-pulse bg-accent-200"
+                  aria-hidden="true"
+                />
+              ) : null}
               {flat.status === 'error' ? (
                 <p role="alert" className="mt-2 rounded bg-red-50 p-2 text-sm text-red-800">
                   This figure cannot be drawn: {flat.error}
@@ -233,7 +330,10 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
       {canEdit ? (
         <div className="flex flex-wrap items-end gap-3 rounded-lg border border-stone-200 bg-stone-50 p-3">
           <div className="min-w-64 flex-1 space-y-1">
-            <label htmlFor="composer-revision-note" className="block text-sm font-semibold text-stone-800">
+            <label
+              htmlFor="composer-revision-note"
+              className="block text-sm font-semibold text-stone-800"
+            >
               Revision note
             </label>
             <input
@@ -246,7 +346,12 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
               className="block w-full rounded-md border border-stone-300 bg-white px-2.5 py-1.5 text-sm shadow-xs"
             />
           </div>
-          <Button variant="primary" disabled={!dirty || (newer && dirty)} busy={busy === 'save'} onClick={() => void doSave(history.savedRevision)}>
+          <Button
+            variant="primary"
+            disabled={!dirty || (newer && dirty)}
+            busy={busy === 'save'}
+            onClick={() => void doSave(history.savedRevision)}
+          >
             {busy === 'save' ? 'Saving…' : `Save figure as revision ${history.savedRevision + 1}`}
           </Button>
         </div>
@@ -257,7 +362,11 @@ export function Composer({ figure, houseStyle, canEdit, readOnlyReason, save, du
           <h3 id="composer-house-style-title" className="text-sm font-semibold text-stone-800">
             House style
           </h3>
-          <HouseStylePanel overrides={overrides} readOnly={readOnly} onApply={() => edit(applyHouseStyle(spec), 'house-style')} />
+          <HouseStylePanel
+            overrides={overrides}
+            readOnly={readOnly}
+            onApply={() => edit(applyHouseStyle(spec), 'house-style')}
+          />
         </section>
         <section aria-labelledby="composer-print-title" className="min-w-0 space-y-2">
           <h3 id="composer-print-title" className="text-sm font-semibold text-stone-800">

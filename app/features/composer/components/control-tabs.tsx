@@ -8,10 +8,21 @@ export interface Tab {
   content: ReactNode;
 }
 
-export function ControlTabs({ tabs, selected, onSelect }: { tabs: readonly Tab[]; selected: string; onSelect: (id: string) => void }) {
+export function ControlTabs({
+  tabs,
+  selected,
+  onSelect,
+}: {
+  tabs: readonly Tab[];
+  selected: string;
+  onSelect: (id: string) => void;
+}) {
   const base = useId();
   const refs = useRef<(HTMLButtonElement | null)[]>([]);
-  const index = Math.max(0, tabs.findIndex((t) => t.id === selected));
+  const index = Math.max(
+    0,
+    tabs.findIndex((t) => t.id === selected),
+  );
   const move = (i: number) => {
     const next = (i + tabs.length) % tabs.length;
     onSelect(tabs[next].id);
@@ -19,7 +30,11 @@ export function ControlTabs({ tabs, selected, onSelect }: { tabs: readonly Tab[]
   };
   return (
     <div>
-      <div role="tablist" aria-label="Composer controls" className="flex flex-wrap gap-1 border-b border-stone-200">
+      <div
+        role="tablist"
+        aria-label="Composer controls"
+        className="flex flex-wrap gap-0.5 border-b border-stone-200"
+      >
         {tabs.map((t, i) => (
           <button
             key={t.id}
@@ -42,8 +57,10 @@ export function ControlTabs({ tabs, selected, onSelect }: { tabs: readonly Tab[]
               e.preventDefault();
             }}
             className={cn(
-              '-mb-px rounded-t-md border border-b-0 px-3 py-1.5 text-sm font-semibold',
-              i === index ? 'border-stone-200 bg-white text-accent-800' : 'border-transparent text-stone-600 hover:text-stone-900',
+              '-mb-px rounded-t-md border border-b-0 px-2.5 py-1.5 text-sm font-semibold',
+              i === index
+                ? 'border-stone-200 bg-white text-accent-800'
+                : 'border-transparent text-stone-600 hover:text-stone-900',
             )}
           >
             {t.label}

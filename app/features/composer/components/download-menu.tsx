@@ -14,17 +14,37 @@ interface Item {
 }
 
 const ITEMS: readonly Item[] = [
-  { id: 'png', format: 'png', cmyk: false, label: 'PNG', detail: 'raster, sRGB, with the dpi recorded' },
+  {
+    id: 'png',
+    format: 'png',
+    cmyk: false,
+    label: 'PNG',
+    detail: 'raster, sRGB, with the dpi recorded',
+  },
   { id: 'tiff', format: 'tiff', cmyk: false, label: 'TIFF', detail: 'raster, sRGB, LZW' },
-  { id: 'tiff-cmyk', format: 'tiff', cmyk: true, label: 'TIFF in CMYK', detail: 'for press; colours shift in the conversion' },
-  { id: 'pdf', format: 'pdf', cmyk: false, label: 'PDF', detail: 'fonts embedded; 2D figures as vectors' },
+  {
+    id: 'tiff-cmyk',
+    format: 'tiff',
+    cmyk: true,
+    label: 'TIFF in CMYK',
+    detail: 'for press; colours shift in the conversion',
+  },
+  {
+    id: 'pdf',
+    format: 'pdf',
+    cmyk: false,
+    label: 'PDF',
+    detail: 'fonts embedded; 2D figures as vectors',
+  },
   { id: 'svg', format: 'svg', cmyk: false, label: 'SVG', detail: 'vector where the figure is 2D' },
 ];
 
 const CMYK_NOTE =
   'CMYK files are converted from the screen colours: bright phase colours shift and dull a little. Check a printed proof.';
 
-type Outcome = { kind: 'done'; filename: string; notes: string[]; cmyk: boolean } | { kind: 'error'; message: string };
+type Outcome =
+  | { kind: 'done'; filename: string; notes: string[]; cmyk: boolean }
+  | { kind: 'error'; message: string };
 
 function saveBlob(blob: Blob, filename: string): void {
   const url = URL.createObjectURL(blob);
@@ -38,7 +58,15 @@ function saveBlob(blob: Blob, filename: string): void {
   setTimeout(() => URL.revokeObjectURL(url), 60_000);
 }
 
-export function DownloadMenu({ figureId, revision, unsaved }: { figureId: number; revision: number; unsaved: boolean }) {
+export function DownloadMenu({
+  figureId,
+  revision,
+  unsaved,
+}: {
+  figureId: number;
+  revision: number;
+  unsaved: boolean;
+}) {
   const queryClient = useQueryClient();
   const [open, setOpen] = useState(false);
   const [busy, setBusy] = useState<string | null>(null);
@@ -58,12 +86,20 @@ export function DownloadMenu({ figureId, revision, unsaved }: { figureId: number
     setOutcome(null);
     try {
       const file = await queryClient.fetchQuery(
-        getRenderQueryOptions(figureId, { format: item.format, revision, cmyk: item.cmyk, download: true }),
+        getRenderQueryOptions(figureId, {
+          format: item.format,
+          revision,
+          cmyk: item.cmyk,
+          download: true,
+        }),
       );
       saveBlob(file.blob, file.filename);
       setOutcome({ kind: 'done', filename: file.filename, notes: file.notes, cmyk: item.cmyk });
     } catch (error) {
-      setOutcome({ kind: 'error', message: error instanceof Error ? error.message : String(error) });
+      setOutcome({
+        kind: 'error',
+        message: error instanceof Error ? error.message : String(error),
+      });
     } finally {
       setBusy(null);
     }
@@ -86,54 +122,56 @@ export function DownloadMenu({ figureId, revision, unsaved }: { figureId: number
   }
 
   return (
-    <div className="relative">
-      <button
-        ref={buttonRef}
-        type="button"
-        className={buttonClasses('secondary')}
-        aria-haspopup="menu"
-        aria-expanded={open}
-        aria-controls={open ? menuId : undefined}
-        aria-busy={busy !== null || undefined}
-        disabled={busy !== null}
-        onClick={() => setOpen((o) => !o)}
-      >
-        {busy ? `Preparing ${busy}…` : 'Download'} <span aria-hidden="true">▾</span>
-      </button>
-      {open ? (
-        <div
-          id={menuId}
-          role="menu"
-          aria-label={`Download revision ${revision}`}
-          onKeyDown={onMenuKey}
-          className="absolute right-0 z-20 mt-1 w-80 rounded-md border border-stone-300 bg-white p-1 shadow-lg"
+    <>
+      <div className="relative">
+        <button
+          ref={buttonRef}
+          type="button"
+          className={buttonClasses('secondary')}
+          aria-haspopup="menu"
+          aria-expanded={open}
+          aria-controls={open ? menuId : undefined}
+          aria-busy={busy !== null || undefined}
+          disabled={busy !== null}
+          onClick={() => setOpen((o) => !o)}
         >
-          <p className="px-2.5 py-1.5 text-xs text-stone-600" role="presentation">
-            Revision {revision}
-            {unsaved ? ' as saved (your unsaved changes are not in these files)' : ''}
-          </p>
-          {ITEMS.map((item, i) => (
-            <button
-              key={item.id}
-              ref={(el) => {
-                itemRefs.current[i] = el;
-              }}
-              type="button"
-              role="menuitem"
-              tabIndex={-1}
-              onClick={() => void download(item)}
-              className="block w-full rounded px-2.5 py-1.5 text-left text-sm hover:bg-accent-50 focus-visible:bg-accent-50"
-            >
-              <span className="font-semibold text-stone-900">{item.label}</span>
-              <span className="block text-xs text-stone-600">{item.detail}</span>
-            </button>
-          ))}
-        </div>
-      ) : null}
+          {busy ? `Preparing ${busy}…` : 'Download'} <span aria-hidden="true">▾</span>
+        </button>
+        {open ? (
+          <div
+            id={menuId}
+            role="menu"
+            aria-label={`Download revision ${revision}`}
+            onKeyDown={onMenuKey}
+            className="absolute right-0 z-20 mt-1 w-80 rounded-md border border-stone-300 bg-white p-1 shadow-lg"
+          >
+            <p className="px-2.5 py-1.5 text-xs text-stone-600" role="presentation">
+              Revision {revision}
+              {unsaved ? ' as saved (your unsaved changes are not in these files)' : ''}
+            </p>
+            {ITEMS.map((item, i) => (
+              <button
+                key={item.id}
+                ref={(el) => {
+                  itemRefs.current[i] = el;
+                }}
+                type="button"
+                role="menuitem"
+                tabIndex={-1}
+                onClick={() => void download(item)}
+                className="block w-full rounded px-2.5 py-1.5 text-left text-sm hover:bg-accent-50 focus-visible:bg-accent-50"
+              >
+                <span className="font-semibold text-stone-900">{item.label}</span>
+                <span className="block text-xs text-stone-600">{item.detail}</span>
+              </button>
+            ))}
+          </div>
+        ) : null}
+      </div>
       {outcome ? (
         <div
           role={outcome.kind === 'error' ? 'alert' : 'status'}
-          className={`absolute right-0 z-10 mt-1 w-80 rounded-md border p-2.5 text-xs shadow ${outcome.kind === 'error' ? 'border-red-300 bg-red-50 text-red-800' : 'border-stone-300 bg-white text-stone-800'}`}
+          className={`order-last basis-full rounded-md border p-2.5 text-xs ${outcome.kind === 'error' ? 'border-red-300 bg-red-50 text-red-800' : 'border-stone-300 bg-white text-stone-800'}`}
         >
           {outcome.kind === 'error' ? (
             <p>The file could not be made: {outcome.message}</p>
@@ -150,11 +188,15 @@ export function DownloadMenu({ figureId, revision, unsaved }: { figureId: number
               ) : null}
             </>
           )}
-          <button type="button" className="mt-1 text-accent-700 underline" onClick={() => setOutcome(null)}>
+          <button
+            type="button"
+            className="mt-1 text-accent-700 underline"
+            onClick={() => setOutcome(null)}
+          >
             Dismiss
           </button>
         </div>
       ) : null}
-    </div>
+    </>
   );
 }

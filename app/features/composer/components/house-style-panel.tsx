@@ -14,18 +14,29 @@ export function HouseStylePanel({
   readOnly: boolean;
 }) {
   if (overrides.length === 0)
-    return <p className="text-sm text-stone-700">Every look and print setting comes from the project’s house style.</p>;
+    return (
+      <p className="text-sm text-stone-700">
+        Every look and print setting comes from the project’s house style.
+      </p>
+    );
   return (
     <div className="space-y-3">
       <table className="w-full text-left text-xs">
         <caption className="mb-1 text-left text-sm text-stone-700">
-          This figure sets {overrides.length === 1 ? 'one setting' : `${overrides.length} settings`} of its own:
+          This figure sets {overrides.length === 1 ? 'one setting' : `${overrides.length} settings`}{' '}
+          of its own:
         </caption>
         <thead className="text-stone-600">
           <tr>
-            <th scope="col" className="font-semibold">Setting</th>
-            <th scope="col" className="font-semibold">This figure</th>
-            <th scope="col" className="font-semibold">House style</th>
+            <th scope="col" className="font-semibold">
+              Setting
+            </th>
+            <th scope="col" className="font-semibold">
+              This figure
+            </th>
+            <th scope="col" className="font-semibold">
+              House style
+            </th>
           </tr>
         </thead>
         <tbody>

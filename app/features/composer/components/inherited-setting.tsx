@@ -32,7 +32,12 @@ export function InheritedSetting({
           <span className="block text-xs text-stone-600">From house style: {houseValue}</span>
         </p>
         {disabled ? null : (
-          <Button size="sm" variant="quiet" onClick={onOwn} aria-label={`Set ${name.toLowerCase()} for this figure`}>
+          <Button
+            size="sm"
+            variant="quiet"
+            onClick={onOwn}
+            aria-label={`Set ${name.toLowerCase()} for this figure`}
+          >
             Set here
           </Button>
         )}
@@ -44,7 +49,12 @@ export function InheritedSetting({
       {disabled ? null : (
         <div className="flex items-center justify-between gap-2 text-xs text-stone-600">
           <span>House style: {houseValue}</span>
-          <Button size="sm" variant="quiet" onClick={onInherit} aria-label={`Use the house style for ${name.toLowerCase()}`}>
+          <Button
+            size="sm"
+            variant="quiet"
+            onClick={onInherit}
+            aria-label={`Use the house style for ${name.toLowerCase()}`}
+          >
             Use house style
           </Button>
         </div>

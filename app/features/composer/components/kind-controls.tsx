@@ -34,6 +34,7 @@ export const KIND_NAMES: Record<KindType, string> = {
   cloud: 'Probability cloud',
   angular: 'Angular shape',
   levels: 'Energy levels',
+  potential: 'Effective potential',
 };
 
 const PLANES = [
@@ -43,9 +44,9 @@ const PLANES = [
 ] as const;
 const QUANTITIES: { value: RadialCurve['quantity']; label: string }[] = [
   { value: 'R', label: 'R(r)' },
-  { value: 'r2R2', label: 'r²R² (radial distribution)' },
-  { value: 'cumulative', label: 'Cumulative probability' },
-  { value: 'veff', label: 'Effective potential' },
+  { value: 'r2R2', label: 'r²R² (distribution)' },
+  { value: 'cumulative', label: 'Cumulative P(r)' },
+  { value: 'veff', label: 'V_eff(r)' },
 ];
 
 interface Props {
@@ -68,7 +69,9 @@ function PlaneField({
   disabled: boolean;
 }) {
   if (typeof plane !== 'string')
-    return <p className="text-sm text-stone-700">Plane: a custom normal (set outside the composer).</p>;
+    return (
+      <p className="text-sm text-stone-700">Plane: a custom normal (set outside the composer).</p>
+    );
   return (
     <ChoiceField
       label="Plane through the nucleus"
@@ -81,7 +84,15 @@ function PlaneField({
 }
 
 /** The ✕ at the end of a list row (an empty cell keeps the grid when it cannot be removed). */
-function RemoveRow({ show, label, onClick }: { show: boolean; label: string; onClick: () => void }) {
+function RemoveRow({
+  show,
+  label,
+  onClick,
+}: {
+  show: boolean;
+  label: string;
+  onClick: () => void;
+}) {
   if (!show) return <span />;
   return (
     <Button size="sm" variant="quiet" aria-label={label} onClick={onClick}>
@@ -150,7 +161,12 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
                 max={99.9}
                 disabled={readOnly}
                 onChange={(v) =>
-                  edit(patchKind(spec, 'isosurface', { outerSurface: { ...k.outerSurface!, enclosed: v / 100 } }), 'outer.enclosed')
+                  edit(
+                    patchKind(spec, 'isosurface', {
+                      outerSurface: { ...k.outerSurface!, enclosed: v / 100 },
+                    }),
+                    'outer.enclosed',
+                  )
                 }
               />
               <NumberField
@@ -162,7 +178,12 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
                 integer
                 disabled={readOnly}
                 onChange={(v) =>
-                  edit(patchKind(spec, 'isosurface', { outerSurface: { ...k.outerSurface!, opacity: v / 100 } }), 'outer.opacity')
+                  edit(
+                    patchKind(spec, 'isosurface', {
+                      outerSurface: { ...k.outerSurface!, opacity: v / 100 },
+                    }),
+                    'outer.opacity',
+                  )
                 }
               />
             </div>
@@ -172,7 +193,11 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
     case 'slice':
       return (
         <>
-          <PlaneField plane={k.plane} disabled={readOnly} onChange={(plane) => edit(patchKind(spec, 'slice', { plane }), 'plane')} />
+          <PlaneField
+            plane={k.plane}
+            disabled={readOnly}
+            onChange={(plane) => edit(patchKind(spec, 'slice', { plane }), 'plane')}
+          />
           <ChoiceField
             label="Quantity"
             value={k.quantity}
@@ -194,7 +219,8 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             onChange={(mode) =>
               edit(
                 patchKind(spec, 'slice', {
-                  contours: mode === 'enclosed' ? { mode, fractions: [0.5, 0.9] } : { mode, levels: [] },
+                  contours:
+                    mode === 'enclosed' ? { mode, fractions: [0.5, 0.9] } : { mode, levels: [] },
                 }),
                 'contours.mode',
               )
@@ -210,7 +236,12 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
               maxItems={12}
               disabled={readOnly}
               hint="Comma-separated, e.g. 50, 90."
-              onChange={(fractions) => edit(patchKind(spec, 'slice', { contours: { mode: 'enclosed', fractions } }), 'contours')}
+              onChange={(fractions) =>
+                edit(
+                  patchKind(spec, 'slice', { contours: { mode: 'enclosed', fractions } }),
+                  'contours',
+                )
+              }
             />
           ) : (
             <ListField
@@ -222,7 +253,9 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
               maxItems={24}
               disabled={readOnly}
               hint="Comma-separated; leave empty for none."
-              onChange={(levels) => edit(patchKind(spec, 'slice', { contours: { mode: 'levels', levels } }), 'contours')}
+              onChange={(levels) =>
+                edit(patchKind(spec, 'slice', { contours: { mode: 'levels', levels } }), 'contours')
+              }
             />
           )}
           <NumberField
@@ -243,7 +276,10 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
         <>
           <ol className="space-y-2" aria-label="Curves">
             {k.curves.map((c, i) => (
-              <li key={i} className="grid grid-cols-[1fr_1fr_2fr_auto] items-end gap-2">
+              <li
+                key={i}
+                className="grid grid-cols-[4.5rem_5rem_minmax(0,1fr)_auto] items-end gap-2"
+              >
                 <ChoiceField
                   label={`Curve ${i + 1} n`}
                   value={c.n}
@@ -255,7 +291,10 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
                   label={`Curve ${i + 1} l`}
                   value={c.l}
                   disabled={readOnly}
-                  choices={range(0, c.n - 1).map((l) => ({ value: l, label: `${l} (${angularMomentumLetter(l)})` }))}
+                  choices={range(0, c.n - 1).map((l) => ({
+                    value: l,
+                    label: `${l} (${angularMomentumLetter(l)})`,
+                  }))}
                   onChange={(l) => edit(setRadialCurve(spec, i, { l }), `curves.${i}.l`)}
                 />
                 <ChoiceField
@@ -263,13 +302,23 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
                   value={c.quantity}
                   disabled={readOnly}
                   choices={QUANTITIES}
-                  onChange={(quantity) => edit(setRadialCurve(spec, i, { quantity }), `curves.${i}.quantity`)}
+                  onChange={(quantity) =>
+                    edit(setRadialCurve(spec, i, { quantity }), `curves.${i}.quantity`)
+                  }
                 />
-                <RemoveRow show={!readOnly && k.curves.length > 1} label={`Remove curve ${i + 1}`} onClick={() => edit(removeRadialCurve(spec, i), 'curves')} />
+                <RemoveRow
+                  show={!readOnly && k.curves.length > 1}
+                  label={`Remove curve ${i + 1}`}
+                  onClick={() => edit(removeRadialCurve(spec, i), 'curves')}
+                />
               </li>
             ))}
           </ol>
-          <AddRow show={!readOnly && k.curves.length < MAX_RADIAL_CURVES} label="Add a curve" onClick={() => edit(addRadialCurve(spec), 'curves')} />
+          <AddRow
+            show={!readOnly && k.curves.length < MAX_RADIAL_CURVES}
+            label="Add a curve"
+            onClick={() => edit(addRadialCurve(spec), 'curves')}
+          />
           <CheckboxField
             label="Fixed radius range"
             checked={k.rMax !== undefined}
@@ -298,13 +347,20 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             label="Mark radial nodes"
             checked={k.showNodes}
             disabled={readOnly}
-            onChange={(e) => edit(patchKind(spec, 'radial', { showNodes: e.target.checked }), 'showNodes')}
+            onChange={(e) =>
+              edit(patchKind(spec, 'radial', { showNodes: e.target.checked }), 'showNodes')
+            }
           />
           <CheckboxField
             label="Mark the most probable radius"
             checked={k.showMostProbable}
             disabled={readOnly}
-            onChange={(e) => edit(patchKind(spec, 'radial', { showMostProbable: e.target.checked }), 'showMostProbable')}
+            onChange={(e) =>
+              edit(
+                patchKind(spec, 'radial', { showMostProbable: e.target.checked }),
+                'showMostProbable',
+              )
+            }
           />
         </>
       );
@@ -357,7 +413,11 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             onChange={(quantity) => edit(patchKind(spec, 'angular', { quantity }), 'quantity')}
           />
           {k.mode === 'curve' ? (
-            <PlaneField plane={k.plane} disabled={readOnly} onChange={(plane) => edit(patchKind(spec, 'angular', { plane }), 'plane')} />
+            <PlaneField
+              plane={k.plane}
+              disabled={readOnly}
+              onChange={(plane) => edit(patchKind(spec, 'angular', { plane }), 'plane')}
+            />
           ) : null}
         </>
       );
@@ -380,21 +440,36 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
                   label={`Transition ${i + 1} from n =`}
                   value={t.upper}
                   disabled={readOnly}
-                  choices={range(2, MAX_TRANSITION_UPPER).map((n) => ({ value: n, label: String(n) }))}
-                  onChange={(v) => edit(setTransition(spec, i, 'upper', v), `transitions.${i}.upper`)}
+                  choices={range(2, MAX_TRANSITION_UPPER).map((n) => ({
+                    value: n,
+                    label: String(n),
+                  }))}
+                  onChange={(v) =>
+                    edit(setTransition(spec, i, 'upper', v), `transitions.${i}.upper`)
+                  }
                 />
                 <ChoiceField
                   label={`Transition ${i + 1} to n =`}
                   value={t.lower}
                   disabled={readOnly}
                   choices={range(1, t.upper - 1).map((n) => ({ value: n, label: String(n) }))}
-                  onChange={(v) => edit(setTransition(spec, i, 'lower', v), `transitions.${i}.lower`)}
+                  onChange={(v) =>
+                    edit(setTransition(spec, i, 'lower', v), `transitions.${i}.lower`)
+                  }
                 />
-                <RemoveRow show={!readOnly} label={`Remove transition ${i + 1}`} onClick={() => edit(removeTransition(spec, i), 'transitions')} />
+                <RemoveRow
+                  show={!readOnly}
+                  label={`Remove transition ${i + 1}`}
+                  onClick={() => edit(removeTransition(spec, i), 'transitions')}
+                />
               </li>
             ))}
           </ol>
-          <AddRow show={!readOnly && k.transitions.length < MAX_TRANSITIONS} label="Add a transition" onClick={() => edit(addTransition(spec), 'transitions')} />
+          <AddRow
+            show={!readOnly && k.transitions.length < MAX_TRANSITIONS}
+            label="Add a transition"
+            onClick={() => edit(addTransition(spec), 'transitions')}
+          />
         </>
       );
   }

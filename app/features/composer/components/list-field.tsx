@@ -16,7 +16,17 @@ interface ListFieldProps {
   disabled?: boolean;
 }
 
-export function ListField({ label, values, onChange, parse, show, maxItems, unit, hint, disabled }: ListFieldProps) {
+export function ListField({
+  label,
+  values,
+  onChange,
+  parse,
+  show,
+  maxItems,
+  unit,
+  hint,
+  disabled,
+}: ListFieldProps) {
   const id = useId();
   const current = values.map(show).join(', ');
   const [draft, setDraft] = useState<{ text: string; over: string } | null>(null);

@@ -71,12 +71,18 @@ export function NumberField({
           value={text}
           disabled={disabled}
           aria-invalid={invalid || undefined}
-          aria-describedby={[hint ? hintId : '', invalid ? errorId : ''].filter(Boolean).join(' ') || undefined}
+          aria-describedby={
+            [hint ? hintId : '', invalid ? errorId : ''].filter(Boolean).join(' ') || undefined
+          }
           onChange={(e) => {
             const next = e.target.value;
             const v = Number(next.replace(',', '.'));
             const ok =
-              next.trim() !== '' && Number.isFinite(v) && v >= min && v <= max && (!integer || Number.isInteger(v));
+              next.trim() !== '' &&
+              Number.isFinite(v) &&
+              v >= min &&
+              v <= max &&
+              (!integer || Number.isInteger(v));
             setDraft({ text: next, over: ok ? v : value });
             if (ok && v !== value) onChange(v);
           }}

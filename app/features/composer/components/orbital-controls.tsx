@@ -70,7 +70,10 @@ function TermControls({
         label={`${prefix}l (subshell)`}
         value={t.l}
         disabled={readOnly}
-        choices={range(0, t.n - 1).map((l) => ({ value: l, label: `${l} (${angularMomentumLetter(l)})` }))}
+        choices={range(0, t.n - 1).map((l) => ({
+          value: l,
+          label: `${l} (${angularMomentumLetter(l)})`,
+        }))}
         onChange={(l) => onEdit(setQuantumNumber(spec, index, 'l', l), field('l'))}
       />
       <ChoiceField
@@ -78,7 +81,9 @@ function TermControls({
         className="col-span-2"
         value={t.m}
         disabled={readOnly}
-        hint={t.basis === 'real' ? 'Real orbitals by name; m as in the cos/sin convention.' : undefined}
+        hint={
+          t.basis === 'real' ? 'Real orbitals by name; m as in the cos/sin convention.' : undefined
+        }
         choices={orbitalChoices(t.l, t.basis).map((c) => ({
           value: c.m,
           label: `${t.n}${orbitalPlainText(c.label)}${t.basis === 'real' && t.l > 0 && t.l <= 3 ? ` (m = ${c.m > 0 ? '+' : ''}${c.m})` : ''}`,
@@ -119,7 +124,9 @@ export function OrbitalControls({ spec, onEdit, readOnly }: Props) {
             value={spec.system.lengthUnit}
             disabled={readOnly}
             choices={UNITS}
-            onChange={(lengthUnit) => onEdit({ ...spec, system: { ...spec.system, lengthUnit } }, 'system.lengthUnit')}
+            onChange={(lengthUnit) =>
+              onEdit({ ...spec, system: { ...spec.system, lengthUnit } }, 'system.lengthUnit')
+            }
           />
           {nucleus ? (
             <ChoiceField
@@ -128,12 +135,17 @@ export function OrbitalControls({ spec, onEdit, readOnly }: Props) {
               value={nucleus}
               disabled={readOnly}
               choices={NUCLEI}
-              onChange={(n) => onEdit({ ...spec, system: { ...spec.system, nucleus: n } }, 'system.nucleus')}
+              onChange={(n) =>
+                onEdit({ ...spec, system: { ...spec.system, nucleus: n } }, 'system.nucleus')
+              }
             />
           ) : (
             <p className="col-span-2 text-sm text-stone-700">
-              Nucleus of mass {String(typeof spec.system.nucleus === 'object' && spec.system.nucleus.massInElectronMasses)} electron masses
-              (set outside the composer).
+              Nucleus of mass{' '}
+              {String(
+                typeof spec.system.nucleus === 'object' && spec.system.nucleus.massInElectronMasses,
+              )}{' '}
+              electron masses (set outside the composer).
             </p>
           )}
         </div>
@@ -173,7 +185,13 @@ export function OrbitalControls({ spec, onEdit, readOnly }: Props) {
                       </Button>
                     )}
                   </div>
-                  <TermControls spec={spec} index={i} onEdit={onEdit} readOnly={readOnly} prefix={`Term ${i + 1} `} />
+                  <TermControls
+                    spec={spec}
+                    index={i}
+                    onEdit={onEdit}
+                    readOnly={readOnly}
+                    prefix={`Term ${i + 1} `}
+                  />
                   <div className="grid grid-cols-2 gap-3">
                     <NumberField
                       label={`Term ${i + 1} weight, real part`}
@@ -182,7 +200,9 @@ export function OrbitalControls({ spec, onEdit, readOnly }: Props) {
                       max={100}
                       step={0.1}
                       disabled={readOnly}
-                      onChange={(v) => onEdit(setWeight(spec, i, 're', v), `state.terms.${i}.weight.re`)}
+                      onChange={(v) =>
+                        onEdit(setWeight(spec, i, 're', v), `state.terms.${i}.weight.re`)
+                      }
                     />
                     <NumberField
                       label={`Term ${i + 1} weight, imaginary part`}
@@ -191,13 +211,17 @@ export function OrbitalControls({ spec, onEdit, readOnly }: Props) {
                       max={100}
                       step={0.1}
                       disabled={readOnly}
-                      onChange={(v) => onEdit(setWeight(spec, i, 'im', v), `state.terms.${i}.weight.im`)}
+                      onChange={(v) =>
+                        onEdit(setWeight(spec, i, 'im', v), `state.terms.${i}.weight.im`)
+                      }
                     />
                   </div>
                 </li>
               ))}
             </ol>
-            <p className="text-xs text-stone-600">Weights are normalised when the figure is drawn.</p>
+            <p className="text-xs text-stone-600">
+              Weights are normalised when the figure is drawn.
+            </p>
             {readOnly || spec.state.terms.length >= MAX_TERMS ? null : (
               <Button size="sm" onClick={() => onEdit(addTerm(spec), 'state.terms')}>
                 Add a term

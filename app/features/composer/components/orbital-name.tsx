@@ -4,7 +4,9 @@ import type { OrbitalLabel } from '../../../../shared/physics/orbital-labels';
 export function OrbitalName({ label }: { label: OrbitalLabel }) {
   return (
     <>
-      {label.parts.map((p, i) => ('t' in p ? <span key={i}>{p.t}</span> : <sub key={i}>{p.sub}</sub>))}
+      {label.parts.map((p, i) =>
+        't' in p ? <span key={i}>{p.t}</span> : <sub key={i}>{p.sub}</sub>,
+      )}
     </>
   );
 }

@@ -19,14 +19,19 @@ export function StaleNotice({
   onSaveMine: () => void;
 }) {
   return (
-    <div role="alert" className="space-y-2 rounded-lg border border-amber-300 bg-amber-50 p-3 text-sm text-amber-950">
+    <div
+      role="alert"
+      className="space-y-2 rounded-lg border border-amber-300 bg-amber-50 p-3 text-sm text-amber-950"
+    >
       <p className="font-semibold">
         {savedBy} saved revision {revision} while you were editing.
       </p>
       {theirChanges.length > 0 ? (
         <details>
           <summary className="cursor-pointer">
-            Revision {revision} changed {theirChanges.length === 1 ? 'one setting' : `${theirChanges.length} settings`} of the figure
+            Revision {revision} changed{' '}
+            {theirChanges.length === 1 ? 'one setting' : `${theirChanges.length} settings`} of the
+            figure
           </summary>
           <ul className="mt-1 list-disc pl-5 font-mono text-xs">
             {theirChanges.slice(0, 20).map((c) => (

@@ -4,7 +4,10 @@ import type { SceneFact } from '../../../../shared/figures/scene';
 import type { StateFacts } from '../utils/state-facts';
 import { OrbitalName } from './orbital-name';
 
-const fmt = (v: number, digits = 4) => (Math.abs(v) >= 1e5 || (v !== 0 && Math.abs(v) < 1e-3) ? v.toExponential(3) : v.toPrecision(digits));
+const fmt = (v: number, digits = 4) =>
+  Math.abs(v) >= 1e5 || (v !== 0 && Math.abs(v) < 1e-3)
+    ? v.toExponential(3)
+    : v.toPrecision(digits);
 
 export function StateReadout({
   facts,
@@ -29,12 +32,26 @@ export function StateReadout({
           <caption className="sr-only">Computed values for each orbital of the state</caption>
           <thead className="text-stone-600">
             <tr>
-              <th scope="col" className="py-1 font-semibold">Orbital</th>
-              {many ? <th scope="col" className="font-semibold">Share</th> : null}
-              <th scope="col" className="font-semibold">Energy</th>
-              <th scope="col" className="font-semibold">Nodes (radial / angular)</th>
-              <th scope="col" className="font-semibold">⟨r⟩</th>
-              <th scope="col" className="font-semibold">Most probable r</th>
+              <th scope="col" className="py-1 font-semibold">
+                Orbital
+              </th>
+              {many ? (
+                <th scope="col" className="font-semibold">
+                  Share
+                </th>
+              ) : null}
+              <th scope="col" className="font-semibold">
+                Energy
+              </th>
+              <th scope="col" className="font-semibold">
+                Nodes (radial / angular)
+              </th>
+              <th scope="col" className="font-semibold">
+                ⟨r⟩
+              </th>
+              <th scope="col" className="font-semibold">
+                Most probable r
+              </th>
             </tr>
           </thead>
           <tbody className="text-stone-900">
@@ -45,7 +62,8 @@ export function StateReadout({
                 </th>
                 {many ? <td>{(100 * t.share).toFixed(1)} %</td> : null}
                 <td>
-                  {fmt(t.energyEv)} eV <span className="text-stone-600">({fmt(t.energyHartree)} Eₕ)</span>
+                  {fmt(t.energyEv)} eV{' '}
+                  <span className="text-stone-600">({fmt(t.energyHartree)} Eₕ)</span>
                 </td>
                 <td>
                   {t.radialNodes} / {t.angularNodes}
@@ -64,11 +82,16 @@ export function StateReadout({
       {showsState && many ? (
         <p className="text-xs text-stone-700">
           Mean energy Σ|c|²E = {fmt(facts.meanEnergyEv)} eV.
-          {facts.mixesEnergies ? ' The terms differ in energy, so the state changes with time.' : ''}
+          {facts.mixesEnergies
+            ? ' The terms differ in energy, so the state changes with time.'
+            : ''}
         </p>
       ) : null}
       {sceneFacts.length > 0 ? (
-        <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-xs" aria-label="Values printed in the figure">
+        <dl
+          className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-xs"
+          aria-label="Values printed in the figure"
+        >
           {sceneFacts.slice(0, 14).map((f) => (
             <div key={f.name} className="contents">
               <dt className="text-stone-600">{f.name}</dt>

@@ -24,7 +24,17 @@ interface Props {
   readOnly: boolean;
 }
 
-function ColourInput({ label, value, onChange, disabled }: { label: string; value: string; onChange: (v: string) => void; disabled: boolean }) {
+function ColourInput({
+  label,
+  value,
+  onChange,
+  disabled,
+}: {
+  label: string;
+  value: string;
+  onChange: (v: string) => void;
+  disabled: boolean;
+}) {
   const id = useId();
   return (
     <div className="flex items-center justify-between gap-3">
@@ -48,7 +58,10 @@ function ColourInput({ label, value, onChange, disabled }: { label: string; valu
 
 export function LookControls({ spec, houseStyle, onEdit, readOnly }: Props) {
   const resolved: Look = { ...houseStyle.look, ...spec.look } as Look;
-  function setting<K extends keyof Look>(key: K, control: (value: Look[K], set: (v: Look[K]) => void) => React.ReactNode) {
+  function setting<K extends keyof Look>(
+    key: K,
+    control: (value: Look[K], set: (v: Look[K]) => void) => React.ReactNode,
+  ) {
     const set = (v: Look[K]) => onEdit(patchLook(spec, { [key]: v }), `look.${key}`);
     return (
       <InheritedSetting
@@ -64,16 +77,42 @@ export function LookControls({ spec, houseStyle, onEdit, readOnly }: Props) {
       </InheritedSetting>
     );
   }
-  const toggle = (key: 'showAxes' | 'showScaleBar' | 'showNodalSurfaces' | 'showLabel', label: string) =>
-    setting(key, (v, set) => <CheckboxField label={label} checked={v} disabled={readOnly} onChange={(e) => set(e.target.checked)} />);
+  const toggle = (
+    key: 'showAxes' | 'showScaleBar' | 'showNodalSurfaces' | 'showLabel',
+    label: string,
+  ) =>
+    setting(key, (v, set) => (
+      <CheckboxField
+        label={label}
+        checked={v}
+        disabled={readOnly}
+        onChange={(e) => set(e.target.checked)}
+      />
+    ));
 
   return (
     <div className="space-y-4">
-      <ControlGroup legend="Colours" note="Phase colours should differ in lightness as well as hue, so the phases survive greyscale print.">
-        {setting('positiveColour', (v, set) => <ColourInput label="Positive phase colour" value={v} onChange={set} disabled={readOnly} />)}
-        {setting('negativeColour', (v, set) => <ColourInput label="Negative phase colour" value={v} onChange={set} disabled={readOnly} />)}
+      <ControlGroup
+        legend="Colours"
+        note="Phase colours should differ in lightness as well as hue, so the phases survive greyscale print."
+      >
+        {setting('positiveColour', (v, set) => (
+          <ColourInput label="Positive phase colour" value={v} onChange={set} disabled={readOnly} />
+        ))}
+        {setting('negativeColour', (v, set) => (
+          <ColourInput label="Negative phase colour" value={v} onChange={set} disabled={readOnly} />
+        ))}
         {setting('opacity', (v, set) => (
-          <NumberField label="Opacity" unit="%" value={Math.round(v * 100)} min={5} max={100} integer disabled={readOnly} onChange={(p) => set(p / 100)} />
+          <NumberField
+            label="Opacity"
+            unit="%"
+            value={Math.round(v * 100)}
+            min={5}
+            max={100}
+            integer
+            disabled={readOnly}
+            onChange={(p) => set(p / 100)}
+          />
         ))}
       </ControlGroup>
       <ControlGroup legend="What is drawn">
@@ -82,24 +121,48 @@ export function LookControls({ spec, houseStyle, onEdit, readOnly }: Props) {
         {toggle('showNodalSurfaces', 'Show nodal surfaces')}
         {toggle('showLabel', 'Show label')}
         {setting('label', (v, set) => {
-          return (
-            <LabelInput value={v} onChange={set} disabled={readOnly} />
-          );
+          return <LabelInput value={v} onChange={set} disabled={readOnly} />;
         })}
       </ControlGroup>
       <ControlGroup legend="Type and lines">
         {setting('fontSizePt', (v, set) => (
-          <NumberField label="Font size" unit="pt" value={v} min={5} max={24} step={0.5} disabled={readOnly} onChange={set} />
+          <NumberField
+            label="Font size"
+            unit="pt"
+            value={v}
+            min={5}
+            max={24}
+            step={0.5}
+            disabled={readOnly}
+            onChange={set}
+          />
         ))}
         {setting('lineWidthPt', (v, set) => (
-          <NumberField label="Line width" unit="pt" value={v} min={0.1} max={4} step={0.05} disabled={readOnly} onChange={set} />
+          <NumberField
+            label="Line width"
+            unit="pt"
+            value={v}
+            min={0.1}
+            max={4}
+            step={0.05}
+            disabled={readOnly}
+            onChange={set}
+          />
         ))}
       </ControlGroup>
     </div>
   );
 }
 
-function LabelInput({ value, onChange, disabled }: { value: string; onChange: (v: string) => void; disabled: boolean }) {
+function LabelInput({
+  value,
+  onChange,
+  disabled,
+}: {
+  value: string;
+  onChange: (v: string) => void;
+  disabled: boolean;
+}) {
   const id = useId();
   return (
     <div className="space-y-1">
@@ -126,7 +189,10 @@ function LabelInput({ value, onChange, disabled }: { value: string; onChange: (v
 
 export function PrintControls({ spec, houseStyle, onEdit, readOnly }: Props) {
   const resolved: Print = { ...houseStyle.print, ...spec.print } as Print;
-  function setting<K extends keyof Print>(key: K, control: (value: Print[K], set: (v: Print[K]) => void) => React.ReactNode) {
+  function setting<K extends keyof Print>(
+    key: K,
+    control: (value: Print[K], set: (v: Print[K]) => void) => React.ReactNode,
+  ) {
     const set = (v: Print[K]) => onEdit(patchPrint(spec, { [key]: v }), `print.${key}`);
     return (
       <InheritedSetting
@@ -152,15 +218,42 @@ export function PrintControls({ spec, houseStyle, onEdit, readOnly }: Props) {
                 key={p.name}
                 size="sm"
                 aria-pressed={resolved.widthMm === p.widthMm && resolved.heightMm === p.heightMm}
-                onClick={() => onEdit(patchPrint(spec, { widthMm: p.widthMm, heightMm: p.heightMm }), 'print.size')}
+                onClick={() =>
+                  onEdit(
+                    patchPrint(spec, { widthMm: p.widthMm, heightMm: p.heightMm }),
+                    'print.size',
+                  )
+                }
               >
                 {p.name} ({p.widthMm} × {p.heightMm} mm)
               </Button>
             ))}
           </div>
         )}
-        {setting('widthMm', (v, set) => <NumberField label="Width" unit="mm" value={v} min={10} max={500} step={1} disabled={readOnly} onChange={set} />)}
-        {setting('heightMm', (v, set) => <NumberField label="Height" unit="mm" value={v} min={10} max={500} step={1} disabled={readOnly} onChange={set} />)}
+        {setting('widthMm', (v, set) => (
+          <NumberField
+            label="Width"
+            unit="mm"
+            value={v}
+            min={10}
+            max={500}
+            step={1}
+            disabled={readOnly}
+            onChange={set}
+          />
+        ))}
+        {setting('heightMm', (v, set) => (
+          <NumberField
+            label="Height"
+            unit="mm"
+            value={v}
+            min={10}
+            max={500}
+            step={1}
+            disabled={readOnly}
+            onChange={set}
+          />
+        ))}
       </ControlGroup>
       <ControlGroup legend="Output">
         {setting('dpi', (v, set) => (

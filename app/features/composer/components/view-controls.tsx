@@ -21,7 +21,11 @@ export function ViewControls({
   return (
     <ControlGroup
       legend="Camera"
-      note={threeDimensional ? 'You can also drag the figure, or focus it and use the arrow keys.' : 'This figure is flat: the camera applies to 3D figures only.'}
+      note={
+        threeDimensional
+          ? 'You can also drag the figure, or focus it and use the arrow keys.'
+          : 'This figure is flat: the camera applies to 3D figures only.'
+      }
     >
       <div className="grid grid-cols-2 gap-3">
         <NumberField
@@ -44,7 +48,9 @@ export function ViewControls({
           step={5}
           decimals={1}
           disabled={readOnly || !threeDimensional}
-          onChange={(elevationDeg) => onEdit(patchView(spec, { elevationDeg }), 'view.elevationDeg')}
+          onChange={(elevationDeg) =>
+            onEdit(patchView(spec, { elevationDeg }), 'view.elevationDeg')
+          }
         />
         <NumberField
           label="Zoom"

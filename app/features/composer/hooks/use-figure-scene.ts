@@ -13,7 +13,11 @@ export interface FigureSceneState {
 
 export function useFigureScene(spec: ResolvedFigureSpec | null): FigureSceneState {
   const key = spec ? sceneKey(spec) : null;
-  const [done, setDone] = useState<{ key: string; scene: DrawnScene | null; error: string | null } | null>(null);
+  const [done, setDone] = useState<{
+    key: string;
+    scene: DrawnScene | null;
+    error: string | null;
+  } | null>(null);
   const [lastScene, setLastScene] = useState<DrawnScene | null>(null);
   const hit = spec ? cachedScene(spec) : null;
 
@@ -27,7 +31,8 @@ export function useFigureScene(spec: ResolvedFigureSpec | null): FigureSceneStat
         setDone({ key, scene, error: null });
       },
       (error: Error) => {
-        if (live && !(error instanceof SceneCancelledError)) setDone({ key, scene: null, error: error.message });
+        if (live && !(error instanceof SceneCancelledError))
+          setDone({ key, scene: null, error: error.message });
       },
     );
     return () => {
@@ -39,6 +44,7 @@ export function useFigureScene(spec: ResolvedFigureSpec | null): FigureSceneStat
 
   if (!spec) return { status: 'idle', scene: null, error: null };
   if (hit) return { status: 'ready', scene: hit, error: null };
-  if (done?.key === key && done.error) return { status: 'error', scene: lastScene, error: done.error };
+  if (done?.key === key && done.error)
+    return { status: 'error', scene: lastScene, error: done.error };
   return { status: 'working', scene: lastScene, error: null };
 }

@@ -16,17 +16,21 @@ function typingText(target: EventTarget | null): boolean {
 }
 
 export function useSpecHistory(spec: FigureSpec, revision: number, enabled: boolean) {
-  const [history, dispatch] = useReducer(specHistoryReducer, undefined, (): SpecHistory => startHistory(spec, revision));
+  const [history, dispatch] = useReducer(specHistoryReducer, undefined, (): SpecHistory =>
+    startHistory(spec, revision),
+  );
   const dirty = hasUnsavedChanges(history);
 
   const edit = useCallback(
-    (next: FigureSpec, field: string) => dispatch({ type: 'edit', spec: next, field, at: Date.now() }),
+    (next: FigureSpec, field: string) =>
+      dispatch({ type: 'edit', spec: next, field, at: Date.now() }),
     [],
   );
   const undo = useCallback(() => dispatch({ type: 'undo' }), []);
   const redo = useCallback(() => dispatch({ type: 'redo' }), []);
   const load = useCallback(
-    (next: FigureSpec, rev: number, keepEdits = false) => dispatch({ type: 'load', spec: next, revision: rev, keepEdits }),
+    (next: FigureSpec, rev: number, keepEdits = false) =>
+      dispatch({ type: 'load', spec: next, revision: rev, keepEdits }),
     [],
   );
 

@@ -2,5 +2,9 @@
 import type { FigureKind } from '../../../../shared/spec/figure-spec';
 
 export function isThreeDimensional(kind: FigureKind): boolean {
-  return kind.type === 'isosurface' || kind.type === 'cloud' || (kind.type === 'angular' && kind.mode === 'surface');
+  return (
+    kind.type === 'isosurface' ||
+    kind.type === 'cloud' ||
+    (kind.type === 'angular' && kind.mode === 'surface')
+  );
 }

@@ -31,10 +31,22 @@ function preset(
 }
 
 export const FIGURE_PRESETS: readonly FigurePreset[] = [
-  preset('1s-isosurface', '1s isosurface, 90 %', [[1, 0, 0]], { type: 'isosurface', enclosed: 0.9 }),
-  preset('2pz-isosurface', '2p_z isosurface, 90 %', [[2, 1, 0]], { type: 'isosurface', enclosed: 0.9 }),
-  preset('3dz2-isosurface', '3d_z² isosurface with nodal cones', [[3, 2, 0]], { type: 'isosurface', enclosed: 0.9 }),
-  preset('3pz-slice', '3p_z slice (xz-plane) with contours', [[3, 1, 0]], { type: 'slice', plane: 'xz' }),
+  preset('1s-isosurface', '1s isosurface, 90 %', [[1, 0, 0]], {
+    type: 'isosurface',
+    enclosed: 0.9,
+  }),
+  preset('2pz-isosurface', '2p_z isosurface, 90 %', [[2, 1, 0]], {
+    type: 'isosurface',
+    enclosed: 0.9,
+  }),
+  preset('3dz2-isosurface', '3d_z² isosurface with nodal cones', [[3, 2, 0]], {
+    type: 'isosurface',
+    enclosed: 0.9,
+  }),
+  preset('3pz-slice', '3p_z slice (xz-plane) with contours', [[3, 1, 0]], {
+    type: 'slice',
+    plane: 'xz',
+  }),
   preset('s-radial', '1s, 2s, 3s radial distributions', [[1, 0, 0]], {
     type: 'radial',
     curves: [1, 2, 3].map((n) => ({ n, l: 0, quantity: 'r2R2' })),

@@ -32,7 +32,13 @@ export const SETTING_NAMES: Record<string, string> = {
   formats: 'Formats',
 };
 
-const UNITS: Record<string, string> = { fontSizePt: ' pt', lineWidthPt: ' pt', widthMm: ' mm', heightMm: ' mm', dpi: ' dpi' };
+const UNITS: Record<string, string> = {
+  fontSizePt: ' pt',
+  lineWidthPt: ' pt',
+  widthMm: ' mm',
+  heightMm: ' mm',
+  dpi: ' dpi',
+};
 
 export function describeSetting(field: string, value: unknown): string {
   if (typeof value === 'boolean') return value ? 'shown' : 'hidden';

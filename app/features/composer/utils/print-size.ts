@@ -21,7 +21,11 @@ export interface SizePreset {
 export const SIZE_PRESETS: readonly SizePreset[] = [
   { name: 'Single column', widthMm: COLUMN_WIDTHS_MM.single, heightMm: COLUMN_WIDTHS_MM.single },
   { name: 'Double column', widthMm: COLUMN_WIDTHS_MM.double, heightMm: 116 },
-  { name: 'Slide', widthMm: COLUMN_WIDTHS_MM.slide, heightMm: Math.round((COLUMN_WIDTHS_MM.slide * 9) / 16) },
+  {
+    name: 'Slide',
+    widthMm: COLUMN_WIDTHS_MM.slide,
+    heightMm: Math.round((COLUMN_WIDTHS_MM.slide * 9) / 16),
+  },
 ];
 
 /** Common resolutions: 300 dpi for halftones, 600 for line art (common practice), 150 for screens. */

@@ -4,6 +4,13 @@ export function scopeSvgIds(svg: string, prefix: string): string {
   return svg
     .replace(/\bid="([^"]+)"/g, `id="${prefix}$1"`)
     .replace(/url\(#([^)]+)\)/g, `url(#${prefix}$1)`)
-    .replace(/aria-labelledby="([^"]+)"/g, (_, ids: string) => `aria-labelledby="${ids.split(' ').map((i) => prefix + i).join(' ')}"`)
+    .replace(
+      /aria-labelledby="([^"]+)"/g,
+      (_, ids: string) =>
+        `aria-labelledby="${ids
+          .split(' ')
+          .map((i) => prefix + i)
+          .join(' ')}"`,
+    )
     .replace(/^<\?xml[^>]*>\s*/, '');
 }

@@ -8,7 +8,8 @@ export interface SpecChange {
   to: string;
 }
 
-const show = (v: unknown): string => (v === undefined ? 'house style' : typeof v === 'string' ? v : JSON.stringify(v));
+const show = (v: unknown): string =>
+  v === undefined ? 'house style' : typeof v === 'string' ? v : JSON.stringify(v);
 
 function walk(a: unknown, b: unknown, path: string, out: SpecChange[]): void {
   if (a === b) return;
@@ -17,7 +18,12 @@ function walk(a: unknown, b: unknown, path: string, out: SpecChange[]): void {
   if (objA && objB && Array.isArray(a) === Array.isArray(b)) {
     const keys = new Set([...Object.keys(a), ...Object.keys(b)]);
     for (const k of [...keys].sort())
-      walk((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], path ? `${path}.${k}` : k, out);
+      walk(
+        (a as Record<string, unknown>)[k],
+        (b as Record<string, unknown>)[k],
+        path ? `${path}.${k}` : k,
+        out,
+      );
     return;
   }
   if (JSON.stringify(a) !== JSON.stringify(b)) out.push({ path, from: show(a), to: show(b) });

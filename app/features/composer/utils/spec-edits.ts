@@ -85,7 +85,12 @@ export function setBasis(spec: FigureSpec, index: number, basis: Basis): FigureS
 }
 
 /** Sets one part of a term's complex weight; the state keeps at least one non-zero weight. */
-export function setWeight(spec: FigureSpec, index: number, part: 're' | 'im', value: number): FigureSpec {
+export function setWeight(
+  spec: FigureSpec,
+  index: number,
+  part: 're' | 'im',
+  value: number,
+): FigureSpec {
   if (!Number.isFinite(value)) return spec;
   const terms = spec.state.terms.map((t, i) =>
     i === index ? { ...t, weight: { ...t.weight, [part]: value } } : t,
@@ -178,7 +183,9 @@ export function setRadialCurve(
   patch: Partial<RadialCurve>,
 ): FigureSpec {
   if (spec.kind.type !== 'radial') return spec;
-  const curves = spec.kind.curves.map((c, i) => (i === index ? clampQuantumNumbers({ ...c, ...patch }) : c));
+  const curves = spec.kind.curves.map((c, i) =>
+    i === index ? clampQuantumNumbers({ ...c, ...patch }) : c,
+  );
   return patchKind(spec, 'radial', { curves });
 }
 
@@ -227,7 +234,9 @@ export function addTransition(spec: FigureSpec): FigureSpec {
 
 export function removeTransition(spec: FigureSpec, index: number): FigureSpec {
   if (spec.kind.type !== 'levels') return spec;
-  return patchKind(spec, 'levels', { transitions: spec.kind.transitions.filter((_, i) => i !== index) });
+  return patchKind(spec, 'levels', {
+    transitions: spec.kind.transitions.filter((_, i) => i !== index),
+  });
 }
 
 // ---- view, look, print -------------------------------------------------------------------------

@@ -29,7 +29,14 @@ export type SpecHistoryAction =
   | { type: 'load'; spec: FigureSpec; revision: number; keepEdits?: boolean };
 
 export function startHistory(spec: FigureSpec, revision: number): SpecHistory {
-  return { past: [], present: spec, future: [], saved: spec, savedRevision: revision, lastEdit: null };
+  return {
+    past: [],
+    present: spec,
+    future: [],
+    saved: spec,
+    savedRevision: revision,
+    lastEdit: null,
+  };
 }
 
 export function sameSpec(a: FigureSpec, b: FigureSpec): boolean {
@@ -68,7 +75,13 @@ export function specHistoryReducer(state: SpecHistory, action: SpecHistoryAction
     case 'redo': {
       const [next, ...rest] = state.future;
       if (!next) return state;
-      return { ...state, past: [...state.past, state.present], present: next, future: rest, lastEdit: null };
+      return {
+        ...state,
+        past: [...state.past, state.present],
+        present: next,
+        future: rest,
+        lastEdit: null,
+      };
     }
     case 'load':
       return action.keepEdits

@@ -15,7 +15,12 @@ export class SceneCancelledError extends Error {
 
 const cache = new Map<string, DrawnScene>();
 let worker: Worker | null = null;
-let busy: { id: number; key: string; promise: Promise<DrawnScene>; reject: (e: Error) => void } | null = null;
+let busy: {
+  id: number;
+  key: string;
+  promise: Promise<DrawnScene>;
+  reject: (e: Error) => void;
+} | null = null;
 let nextId = 1;
 
 export const sceneKey = (spec: ResolvedFigureSpec): string => canonicalJson(spec);

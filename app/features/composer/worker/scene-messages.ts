@@ -18,5 +18,4 @@ export interface DrawnScene {
 }
 
 export type SceneReply =
-  | { id: number; type: 'done'; scene: DrawnScene }
-  | { id: number; type: 'error'; message: string };
+  { id: number; type: 'done'; scene: DrawnScene } | { id: number; type: 'error'; message: string };
