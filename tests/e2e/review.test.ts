@@ -118,6 +118,30 @@ describe('a reviewer approves a figure and the editor sees it', () => {
     await thread.getByText('2 comments').waitFor();
     await review.scrollIntoViewIfNeeded();
     await saveScreenshot(ravi, 'review-seen-by-editor');
+  });
+
+  it('when the editor approves a figure the reviewer approved meanwhile, then he is told why and sees the current status', async () => {
+    const balmer = 'Energy levels and the Balmer series';
+    for (const page of [ravi, lena]) {
+      await page.getByRole('link', { name: 'Atoms & Bonds — Chapter 4: The Hydrogen Atom' }).click();
+      await page.getByRole('link', { name: balmer, exact: true }).click();
+      await page.getByRole('region', { name: 'Review', exact: true }).getByText('In review', { exact: true }).waitFor();
+    }
+    const lenaReview = lena.getByRole('region', { name: 'Review', exact: true });
+    await lenaReview.getByRole('button', { name: 'Approve revision 1' }).click();
+    await lenaReview.getByText('Approved revision: 1').waitFor();
+
+    const raviReview = ravi.getByRole('region', { name: 'Review', exact: true });
+    await raviReview.getByRole('button', { name: 'Approve revision 1' }).click();
+    const alert = raviReview.getByRole('alert');
+    await alert.waitFor();
+    expect(await alert.textContent()).toMatch(
+      /^A figure that is approved cannot be approved; .*Someone changed the status meanwhile; the status shown is now the current one\.$/,
+    );
+    await raviReview.getByText('Approved revision: 1').waitFor();
+    await raviReview.getByRole('button', { name: 'Request changes' }).waitFor();
+    await raviReview.scrollIntoViewIfNeeded();
+    await saveScreenshot(ravi, 'review-conflict');
     expect(problems).toEqual([]);
   });
 });
