@@ -154,6 +154,50 @@ describe('the figure composer', () => {
     expect(problems).toEqual([]);
   });
 
+  it('when the figure sets its own colour, then it is listed against the house style and "apply house style" clears it', async () => {
+    await page.getByRole('tab', { name: 'Look' }).click();
+    await page.getByRole('button', { name: 'Set positive phase colour for this figure' }).click();
+    const houseStyle = page.getByRole('region', { name: 'House style' });
+    await houseStyle.getByRole('rowheader', { name: 'Positive phase colour' }).waitFor();
+    await page
+      .getByRole('button', { name: 'Use the house style for positive phase colour' })
+      .waitFor();
+    await saveScreenshot(page, 'composer-look-override');
+    await houseStyle.getByRole('button', { name: 'Apply house style (clear these)' }).click();
+    await houseStyle
+      .getByText('Every look and print setting comes from the project’s house style.')
+      .waitFor();
+    await page.getByText('Revision 2, no unsaved changes').waitFor();
+  });
+
+  it('when the slice preset is applied, then the slice is drawn with its colour scale; undo returns to 4f', async () => {
+    await page
+      .getByLabel('Start from a preset')
+      .selectOption({ label: '3p_z slice (xz-plane) with contours' });
+    await page.getByRole('button', { name: 'Apply', exact: true }).click();
+    await page
+      .locator('[data-figure-ready="true"]')
+      .filter({ hasText: /Figure ready: .*3p/ })
+      .waitFor({ timeout: 30_000 });
+    await saveScreenshot(page, 'composer-slice');
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await ready3d(/3D figure ready: 4f_z³/);
+  });
+
+  it('when the state becomes a superposition, then each term has its weights and the read-out gives shares', async () => {
+    await page.getByRole('tab', { name: 'Orbital' }).click();
+    await page.getByText('Superposition', { exact: true }).click();
+    await page.getByRole('list', { name: 'Terms of the superposition' }).waitFor();
+    await page.getByLabel('Term 2 weight, imaginary part').fill('1');
+    await readout()
+      .getByText(/Mean energy/)
+      .waitFor();
+    await ready3d(/3D figure ready: superposition of 2 terms/);
+    await saveScreenshot(page, 'composer-superposition');
+    await page.getByText('One orbital', { exact: true }).click();
+    await ready3d(/3D figure ready: 4f_z³/);
+  });
+
   it('when a viewer opens the figure, then the composer is read-only but downloads remain', async () => {
     const viewer = await (
       await browser.newContext({ viewport: { width: 1360, height: 1000 } })
