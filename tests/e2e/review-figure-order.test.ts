@@ -1,5 +1,5 @@
 // Browser end-to-end: the editor puts the chapter's figures in a new order with the keyboard (Alt+↑ on
-// a focused row), numbers the list in sequence under the chapter prefix, edits one number in place,
+// a focused row) and by dragging a row, numbers the list in sequence under the chapter prefix, edits one number in place,
 // saves, and after reloading finds the order and the numbers kept.
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -69,6 +69,16 @@ describe('the editor reorders and renumbers the figure list', () => {
     await page.getByRole('button', { name: `Move ${P_ORBITAL} down` }).click();
     await page.getByRole('row', { name: `${P_ORBITAL}, position 2 of 8` }).waitFor();
     await page.getByRole('row', { name: `${RADIAL}, position 3 of 8` }).waitFor();
+  });
+
+  it('when the editor drags the last row onto the one above it, then they swap places', async () => {
+    const last = page.getByRole('row', { name: 'The 4f_xyz orbital, position 8 of 8' });
+    await last.dragTo(page.getByRole('row', { name: /^Energy levels and the Balmer series, position 7/ }));
+    await page.getByRole('row', { name: 'The 4f_xyz orbital, position 7 of 8' }).waitFor();
+    // And back, with the keyboard, so that the rest of the test keeps the chapter's order.
+    await page.getByRole('row', { name: 'The 4f_xyz orbital, position 7 of 8' }).focus();
+    await page.keyboard.press('Alt+ArrowDown');
+    await page.getByRole('row', { name: 'The 4f_xyz orbital, position 8 of 8' }).waitFor();
   });
 
   it('when the editor numbers the list in sequence and edits one number, then the number cells show it', async () => {
