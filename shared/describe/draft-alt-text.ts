@@ -8,6 +8,7 @@ import { spectralLine } from '../physics/spectral-lines';
 import { mostProbableRadius } from '../physics/most-probable-radius';
 import { describeSystem, systemMassRatio } from '../figures/figure-system';
 import { lengthUnit } from '../figures/length-units';
+import { buildPotential } from '../solver/potentials/build-potential';
 import type { SpecTerm } from '../spec/figure-spec';
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
 
@@ -150,5 +151,7 @@ export function draftAltText(spec: ResolvedFigureSpec): string {
       const nodes = angularNodes(t.l, t.m, t.basis);
       return `A ${form} of ${what}: the distance from the centre is the function's size in each direction. ${count(nodes.count, 'angular nodal surface')}. ${k.quantity === 'real' ? colours : ''}`.trim();
     }
+    case 'potential':
+      return `Effective-potential figure for the ${buildPotential(k.potential, 'kind.potential').label} potential: V(r), the centrifugal term and V_eff for l = ${k.l.join(', ')}, with the lowest ${k.levels} solved level${k.levels === 1 ? '' : 's'} of each l drawn between their classical turning points.`;
   }
 }

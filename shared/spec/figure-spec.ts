@@ -2,10 +2,28 @@
 // The stored spec may leave `look` and `print` fields unset; the project's house style fills them
 // (see resolve-figure-spec.ts). Documented in README.md ("Figure specification").
 import { z } from 'zod';
+import { coreScreenedCoulombSchema } from '../solver/potentials/core-screened-coulomb';
+import { coulombSchema } from '../solver/potentials/coulomb';
+import { finiteNucleusSchema } from '../solver/potentials/finite-nucleus';
+import { finiteWellSchema } from '../solver/potentials/finite-well';
+import { harmonicOscillatorSchema } from '../solver/potentials/harmonic-oscillator';
+import { hulthenSchema } from '../solver/potentials/hulthen';
+import { infiniteWellSchema } from '../solver/potentials/infinite-well';
+import { linearSchema } from '../solver/potentials/linear';
+import { tabulatedSchema } from '../solver/potentials/tabulated';
+import { valenceGszSchema } from '../solver/potentials/valence-gsz';
+import { yukawaSchema } from '../solver/potentials/yukawa';
 
 export const FIGURE_SPEC_VERSION = 1;
 export const MAX_N = 30;
 export const MAX_Z = 92;
+/** Most angular momenta one effective-potential figure draws, and the largest l it accepts. */
+export const MAX_POTENTIAL_LS = 6;
+export const MAX_POTENTIAL_L = 12;
+/** Most solved levels per l a figure draws. */
+export const MAX_SOLVED_LEVELS = 10;
+/** Tabulated potentials are kept in the spec itself; their CSV text stays below this many characters. */
+export const MAX_SPEC_CSV_CHARS = 200_000;
 /** Uploaded data sets one radial figure may draw. */
 export const MAX_FIGURE_DATASETS = 6;
 
@@ -28,6 +46,36 @@ export const termSchema = z
       ctx.addIssue({ code: 'custom', path: ['m'], message: `|m| must not exceed l (${t.l})` });
   });
 export type SpecTerm = z.infer<typeof termSchema>;
+
+/**
+ * A central potential for the radial solver (shared/solver), exactly the JSON buildPotential accepts:
+ * atomic units throughout, each parameter's unit named in its error message. coulomb { Z };
+ * yukawa { Z, lambda (bohr⁻¹) }; finite-nucleus { Z, radius (bohr) }; harmonic-oscillator
+ * { omega (hartree/ħ) }; finite-well { depth (hartree), radius (bohr) }; infinite-well { radius (bohr) };
+ * linear { F (hartree/bohr) }; hulthen { Z, delta (bohr⁻¹) }; core-screened { Z, a (bohr) };
+ * valence-gsz { Z, electrons, H, d (bohr) }; tabulated { csv (r, V columns), asymptoticCharge? }.
+ */
+export const potentialSpecSchema = z
+  .discriminatedUnion('type', [
+    coulombSchema,
+    yukawaSchema,
+    finiteNucleusSchema,
+    harmonicOscillatorSchema,
+    finiteWellSchema,
+    infiniteWellSchema,
+    linearSchema,
+    hulthenSchema,
+    coreScreenedCoulombSchema,
+    valenceGszSchema,
+    tabulatedSchema.extend({
+      csv: z
+        .string({ error: 'csv must be CSV text' })
+        .max(MAX_SPEC_CSV_CHARS, `csv must be at most ${MAX_SPEC_CSV_CHARS} characters in a figure spec`),
+    }),
+  ])
+  .describe('Central potential V(r) for the radial solver, in hartree with r in bohr');
+export type PotentialSpec = z.infer<typeof potentialSpecSchema>;
+export const DEFAULT_POTENTIAL: PotentialSpec = { type: 'yukawa', Z: 1, lambda: 0.1 };
 
 export const nucleusSchema = z.union([
   z.enum(['infinite', 'H-1', 'H-2', 'He-4']),
@@ -85,6 +133,8 @@ export const radialCurveSchema = z.object({
   n: z.number().int().min(1).max(MAX_N),
   l: z.number().int().min(0).max(MAX_N - 1),
   quantity: z.enum(['R', 'r2R2', 'cumulative', 'veff']),
+  /** "solved": the numerical solution in kind.potential, drawn beside hydrogen's (unset: hydrogen). */
+  source: z.enum(['hydrogen', 'solved']).optional(),
 });
 export const radialKindSchema = z.object({
   type: z.literal('radial'),
@@ -101,6 +151,12 @@ export const radialKindSchema = z.object({
     .max(MAX_FIGURE_DATASETS)
     .refine((d) => new Set(d.map((x) => x.id)).size === d.length, 'list each dataset once')
     .optional(),
+  /** The potential solved for curves with source "solved". */
+  potential: potentialSpecSchema.optional(),
+}).superRefine((k, ctx) => {
+  const solved = k.curves.findIndex((c) => c.source === 'solved');
+  if (solved >= 0 && k.potential === undefined)
+    ctx.addIssue({ code: 'custom', path: ['potential'], message: `curves[${solved}] is solved numerically: give the potential` });
 });
 export const cloudKindSchema = z.object({
   type: z.literal('cloud'),
@@ -120,6 +176,32 @@ export const levelsKindSchema = z.object({
     .array(z.object({ upper: z.number().int().min(2).max(40), lower: z.number().int().min(1).max(39) }))
     .max(24)
     .default([]),
+  /** "solved-vs-hydrogen": kind.potential's levels for l = 0 … lMax beside hydrogen's. */
+  compare: z.enum(['solved-vs-hydrogen']).optional(),
+  potential: potentialSpecSchema.optional(),
+  lMax: z.number().int().min(0).max(MAX_POTENTIAL_LS - 1).optional(),
+}).superRefine((k, ctx) => {
+  if (k.compare !== undefined && k.potential === undefined)
+    ctx.addIssue({ code: 'custom', path: ['potential'], message: 'a comparison with solved levels needs the potential' });
+});
+/**
+ * Effective-potential figure: V(r), the centrifugal term l(l+1)/(2μr²) and V_eff for each l, with the
+ * lowest solved levels as lines between their classical turning points. rMax is in bohr.
+ */
+export const potentialKindSchema = z.object({
+  type: z.literal('potential'),
+  potential: potentialSpecSchema.default(DEFAULT_POTENTIAL),
+  l: z
+    .array(z.number().int().min(0).max(MAX_POTENTIAL_L))
+    .min(1)
+    .max(MAX_POTENTIAL_LS)
+    .refine((ls) => new Set(ls).size === ls.length, 'list each l once')
+    .default([0, 1, 2]),
+  levels: z.number().int().min(1).max(MAX_SOLVED_LEVELS).default(2),
+  rMax: z.number().positive().max(5000).optional(),
+  showCentrifugal: z.boolean().default(true),
+  /** Hydrogen's levels (charge of the potential's Coulomb tail or nucleus) as dashed lines. */
+  compareHydrogen: z.boolean().default(false),
 });
 
 export const figureKindSchema = z.discriminatedUnion('type', [
@@ -129,9 +211,18 @@ export const figureKindSchema = z.discriminatedUnion('type', [
   cloudKindSchema,
   angularKindSchema,
   levelsKindSchema,
+  potentialKindSchema,
 ]);
 export type FigureKind = z.infer<typeof figureKindSchema>;
-export const figureKindNames = ['isosurface', 'slice', 'radial', 'cloud', 'angular', 'levels'] as const;
+export const figureKindNames = [
+  'isosurface',
+  'slice',
+  'radial',
+  'cloud',
+  'angular',
+  'levels',
+  'potential',
+] as const;
 
 export const viewSchema = z.object({
   azimuthDeg: z.number().min(-360).max(360).default(35),

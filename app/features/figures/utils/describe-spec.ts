@@ -92,6 +92,8 @@ function describeKind(spec: FigureSpec): string {
       return `${k.mode === 'surface' ? 'Surface' : `Polar curve in the ${planeName(k.plane)}`} of ${k.quantity === 'abs' ? '|Y|' : 'the real angular part'}`;
     case 'levels':
       return `Levels up to n = ${k.nMax}${k.transitions.length ? `, transitions ${list(k.transitions.map((t) => `${t.upper} → ${t.lower}`))}` : ''}`;
+    case 'potential':
+      return `V(r), centrifugal term and V_eff of the ${k.potential.type} potential for l = ${list(k.l.map(String))}, ${k.levels} solved level${k.levels === 1 ? '' : 's'} each`;
   }
 }
 

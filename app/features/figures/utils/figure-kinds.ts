@@ -28,6 +28,10 @@ export const figureKindInfo: Record<FigureKindName, { name: string; description:
     name: 'Energy-level diagram',
     description: 'Energy levels up to a chosen n, with transitions between them.',
   },
+  potential: {
+    name: 'Effective potential',
+    description: 'A central potential, its centrifugal terms and V_eff for several l, with the solved levels.',
+  },
 };
 
 /** The server reports a figure's kind as a string; an unknown one is shown as it comes. */
