@@ -42,27 +42,38 @@ export function FigureTableBulkActions({
 }: BulkActionsProps) {
   const bulk = useBulkFigureAction(projectId);
   const [confirming, setConfirming] = useState(false);
-  const [message, setMessage] = useState<string | null>(null);
+  // The outcome of the last action, shown only while the selection is the one it left behind.
+  const [outcomeOf, setOutcomeOf] = useState<{ text: string; selection: string } | null>(null);
   const ids = selected.map((f) => f.id);
+  const selectionKey = ids.join(',');
+  const message = outcomeOf?.selection === selectionKey ? outcomeOf.text : null;
+  const one = selected.length === 1;
   const none = selected.length === 0;
   const byId = new Map(selected.map((f) => [f.id, f]));
 
   function submitForReview() {
-    setMessage(null);
+    setOutcomeOf(null);
     bulk.mutate(
       { ids, action: 'submit' },
-      { onSuccess: (result) => setMessage(outcome(result, 'submitted for review', byId)) },
+      {
+        onSuccess: (result) =>
+          setOutcomeOf({
+            text: outcome(result, 'submitted for review', byId),
+            selection: selectionKey,
+          }),
+      },
     );
   }
 
   function remove() {
-    setMessage(null);
+    setOutcomeOf(null);
     bulk.mutate(
       { ids, action: 'delete' },
       {
         onSuccess: (result) => {
           setConfirming(false);
-          setMessage(outcome(result, 'deleted', byId));
+          const left = ids.filter((id) => !result.done.includes(id));
+          setOutcomeOf({ text: outcome(result, 'deleted', byId), selection: left.join(',') });
           onDeleted(result.done);
         },
       },
@@ -111,7 +122,7 @@ export function FigureTableBulkActions({
         open={confirming}
         onClose={() => setConfirming(false)}
         title={`Delete ${plural(selected.length, 'figure', 'figures')}?`}
-        description="This removes these figures and all their revisions from the project. It cannot be undone."
+        description={`This removes ${one ? 'this figure and all its' : 'these figures and all their'} revisions from the project. It cannot be undone.`}
       >
         <ul className="max-h-60 list-disc space-y-1 overflow-y-auto pl-5 text-sm">
           {selected.map((f) => (
@@ -123,7 +134,7 @@ export function FigureTableBulkActions({
         </ul>
         <FormAlert message={formErrorMessage(bulk.error)} />
         <div className="flex justify-end gap-2">
-          <Button onClick={() => setConfirming(false)}>Keep them</Button>
+          <Button onClick={() => setConfirming(false)}>{one ? 'Keep it' : 'Keep them'}</Button>
           <Button variant="danger" busy={bulk.isPending} onClick={remove}>
             {bulk.isPending ? 'Deleting…' : `Delete ${plural(selected.length, 'figure', 'figures')}`}
           </Button>
