@@ -1,6 +1,8 @@
-// Browser end-to-end: the editor puts the chapter's figures in a new order with the keyboard (Alt+↑ on
-// a focused row) and by dragging a row, numbers the list in sequence under the chapter prefix, edits one number in place,
-// saves, and after reloading finds the order and the numbers kept.
+// Browser end-to-end: the editor puts the chapter's figures in a new order with the keyboard (Alt+↑
+// on a focused row) and by dragging a row, numbers the list in sequence under the chapter prefix,
+// edits one number in place, saves, and after reloading finds the order and the numbers kept. Then ticks rows and submits them
+// for review at once (one that cannot be submitted is skipped, with the reason) and deletes one after
+// confirming.
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStack } from '../support/stack';
@@ -14,6 +16,7 @@ const P_ORBITAL = 'The 2p_z orbital';
 /** Number and title of each row of the figure table, top to bottom. */
 async function tableRows(page: Page): Promise<string[]> {
   const table = page.getByRole('table', { name: /Figures in this project/ });
+  await table.getByRole('rowheader').first().waitFor();
   const rows = table.locator('tbody tr');
   const out: string[] = [];
   for (let i = 0; i < (await rows.count()); i++) {
@@ -25,7 +28,7 @@ async function tableRows(page: Page): Promise<string[]> {
   return out;
 }
 
-describe('the editor reorders and renumbers the figure list', () => {
+describe('the editor arranges the figure list and acts on several figures at once', () => {
   let stack: Awaited<ReturnType<typeof startStack>>;
   let browser: Browser;
   let page: Page;
@@ -107,6 +110,40 @@ describe('the editor reorders and renumbers the figure list', () => {
       '4.4 The 3d_z² orbital',
     ]);
     await saveScreenshot(page, 'review-figure-order-saved');
+    expect(problems).toEqual([]);
+  });
+
+  const row = (title: string) =>
+    page.getByRole('table', { name: /Figures in this project/ }).getByRole('row', { name: new RegExp(title) });
+
+  it('when the editor submits a draft and an approved figure together, then the draft goes to review and the other is skipped with the reason', async () => {
+    await page.getByRole('checkbox', { name: 'Select figure 4.5: Slice through the 3p_z orbital' }).check();
+    await page.getByRole('checkbox', { name: 'Select figure 4.1: The 1s orbital' }).check();
+    const selected = page.getByRole('region', { name: 'Selected figures' });
+    await selected.getByText('2 figures selected').waitFor();
+    await selected.getByRole('button', { name: 'Submit for review' }).click();
+    const note = selected.getByRole('status');
+    await note.filter({ hasText: /^1 figure submitted for review\. Skipped figure 4\.1: / }).waitFor();
+    expect(await note.textContent()).toContain('cannot be submitted');
+    await row('Slice through the 3p_z orbital').getByText('In review', { exact: true }).waitFor();
+    await row('The 1s orbital').getByText('Approved', { exact: true }).waitFor();
+    await saveScreenshot(page, 'review-bulk-submitted');
+  });
+
+  it('when the editor deletes a ticked figure, then a dialog names it first and afterwards it is gone', async () => {
+    await page.getByRole('button', { name: 'Clear selection' }).click();
+    // The outcome belongs to the selection it was for.
+    expect(await page.getByText(/submitted for review/).count()).toBe(0);
+    await page.getByRole('checkbox', { name: 'Select figure 4.8: The 4f_xyz orbital' }).check();
+    await page.getByRole('region', { name: 'Selected figures' }).getByRole('button', { name: 'Delete…' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Delete 1 figure?' });
+    await dialog.getByRole('listitem').filter({ hasText: 'The 4f_xyz orbital' }).waitFor();
+    await saveScreenshot(page, 'review-bulk-delete-confirm');
+    await dialog.getByRole('button', { name: 'Delete 1 figure' }).click();
+    await page.getByRole('status').filter({ hasText: '1 figure deleted.' }).waitFor();
+    await row('The 4f_xyz orbital').waitFor({ state: 'detached' });
+    await page.getByText('7 figures', { exact: true }).waitFor();
+    await page.getByText('Tick figures to act on several at once.').waitFor();
     expect(problems).toEqual([]);
   });
 });
