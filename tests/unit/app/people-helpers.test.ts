@@ -40,12 +40,13 @@ describe('openInvitations', () => {
 
 describe('describeExpiry', () => {
   const now = new Date('2026-12-02T06:00:00.000Z');
-  it('when days are left, then whole days are counted down', () => {
+  it('when days are left, then they are counted to the nearest day', () => {
     expect(describeExpiry('2026-12-09T06:00:00.000Z', now)).toBe('expires in 7 days');
-    expect(describeExpiry('2026-12-03T18:00:00.000Z', now)).toBe('expires in 1 day');
+    expect(describeExpiry('2026-12-03T12:00:00.000Z', now)).toBe('expires in 1 day');
+    expect(describeExpiry('2026-12-09T05:59:00.000Z', now)).toBe('expires in 7 days');
   });
-  it('when less than a day is left, then hours are counted', () => {
-    expect(describeExpiry('2026-12-02T09:30:00.000Z', now)).toBe('expires in 3 hours');
+  it('when less than a day is left, then hours are counted to the nearest hour', () => {
+    expect(describeExpiry('2026-12-02T09:10:00.000Z', now)).toBe('expires in 3 hours');
     expect(describeExpiry('2026-12-02T06:20:00.000Z', now)).toBe('expires in 1 hour');
   });
   it('when the time has passed, then it gives the date it expired', () => {

@@ -10,7 +10,7 @@ export interface AccountLinkProblem {
 }
 
 const ask: Record<AccountLink, string> = {
-  reset: 'Ask for a new reset link; only the newest one works.',
+  reset: 'Ask for a new reset link.',
   'confirm-email': 'Ask for the change again on your account page; a new link will be sent.',
 };
 

@@ -17,10 +17,9 @@ export function describeExpiry(expiresAt: string, now: Date): string {
   const left = new Date(expiresAt).getTime() - now.getTime();
   if (Number.isNaN(left)) return `expires ${expiresAt}`;
   if (left <= 0) return `expired on ${formatDate(expiresAt)}`;
-  if (left < DAY_MS) {
-    const hours = Math.max(1, Math.floor(left / HOUR_MS));
-    return `expires in ${hours} ${hours === 1 ? 'hour' : 'hours'}`;
-  }
-  const days = Math.floor(left / DAY_MS);
+  // Rounded: a link mailed a minute ago for a week should read "7 days", not "6".
+  const hours = Math.max(1, Math.round(left / HOUR_MS));
+  if (hours < 24) return `expires in ${hours} ${hours === 1 ? 'hour' : 'hours'}`;
+  const days = Math.round(left / DAY_MS);
   return `expires in ${days} ${days === 1 ? 'day' : 'days'}`;
 }
