@@ -1,5 +1,8 @@
-// Browser end-to-end: the owner exports the chapter's approved figures as PDF from the Exports tab,
-// watches the run's progress bar reach the end, and downloads the bundle, a ZIP.
+// Browser end-to-end, with the job queue and its worker running: the owner exports the chapter's
+// approved figures as PDF from the Exports tab, watches the run's progress bar reach the end, and
+// downloads the bundle, a ZIP; "Export selected" on the figure table carries the ticked figures
+// over; after a house-style change the figure table shows print files out of date until the
+// server has rendered them again.
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
@@ -12,7 +15,7 @@ import { signIn } from './support/sign-in';
 
 const PROJECT = 'Atoms & Bonds — Chapter 4: The Hydrogen Atom';
 
-describe('the owner exports the approved figures', () => {
+describe('exports and print files', () => {
   let server: TestServer;
   let browser: Browser;
   let page: Page;
@@ -98,6 +101,32 @@ describe('the owner exports the approved figures', () => {
     expect(await ticked.count()).toBe(3); // the two figures and PDF
     await form.getByRole('checkbox', { name: /Slice through the 3p_z orbital/, checked: true }).waitFor();
     await form.getByRole('checkbox', { name: /Energy levels and the Balmer series/, checked: true }).waitFor();
-    expect(problems).toEqual([]);
   });
+
+  it(
+    'when the owner changes a project’s house style, then its figure table shows print files out of date and, as the server re-renders them, current',
+    async () => {
+      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
+      await page.getByRole('link', { name: 'CHEM 1020 — Fennwick College lectures' }).click();
+      await page.getByRole('navigation', { name: 'Project' }).getByRole('link', { name: 'Settings' }).click();
+      const form = page.getByRole('form', { name: 'House style' });
+      await form.getByLabel('Resolution (dpi)').fill('150');
+      await form.getByRole('button', { name: 'Save house style' }).click();
+      await form.getByRole('status').waitFor();
+
+      await page.getByRole('navigation', { name: 'Project' }).getByRole('link', { name: 'Figures' }).click();
+      const table = page.getByRole('table', { name: /Figures in this project/ });
+      await table.getByRole('rowheader').first().waitFor();
+      // Nothing was rendered for the new style yet; the table asks again by itself until all are.
+      expect(await table.getByText('Print files out of date', { exact: true }).count()).toBeGreaterThan(0);
+      await table
+        .getByText('Print files out of date', { exact: true })
+        .first()
+        .waitFor({ state: 'detached', timeout: 150_000 });
+      expect(await table.getByText('Print files current', { exact: true }).count()).toBe(4);
+      await saveScreenshot(page, 'exports-print-files-current');
+      expect(problems).toEqual([]);
+    },
+    180_000,
+  );
 });
