@@ -167,7 +167,7 @@ export async function processExportRun(db: Knex, env: Env, mailer: Mailer, runId
       let facts: Record<string, unknown> = {};
       let notes: string[] = [];
       for (const format of run.request.formats) {
-        const r = await renderResolvedSpec(db, spec, format, false);
+        const r = await renderResolvedSpec(db, spec, format, false, Number(run.project_id));
         const name = `${stem}.${format === 'tiff' ? 'tif' : format}`;
         files.push({ name, data: r.bytes });
         entryFiles.push({ name, format, bytes: r.bytes.length, sha256: sha256(r.bytes) });
@@ -190,7 +190,7 @@ export async function processExportRun(db: Knex, env: Env, mailer: Mailer, runId
       };
       entries.push(entry);
       const proofSpec = { ...spec, print: { ...spec.print, dpi: PROOF_DPI, background: 'white' as const } };
-      proofs.push({ entry, spec, png: (await renderResolvedSpec(db, proofSpec, 'png', false)).bytes });
+      proofs.push({ entry, spec, png: (await renderResolvedSpec(db, proofSpec, 'png', false, Number(run.project_id))).bytes });
     } catch (err) {
       errors.push({ figure: label, message: (err as Error).message });
     }

@@ -23,7 +23,7 @@ export async function rerenderProject(db: Knex, projectId: number): Promise<{ re
     const spec = resolveFigureSpec(migrateFigureSpec(row.spec), style);
     for (const format of spec.print.formats) {
       try {
-        await renderResolvedSpec(db, spec, format, false);
+        await renderResolvedSpec(db, spec, format, false, projectId);
         rendered += 1;
       } catch (err) {
         failed += 1; // the figure table keeps showing it as not current; the render route gives the reason

@@ -3,6 +3,7 @@
 // placed in PDF and SVG under the vector overlay (labels, axes, scale bar).
 import sharp from 'sharp';
 import { buildFigureScene } from '../../shared/figures/build-figure-scene';
+import type { FigureDatasets } from '../../shared/figures/radial-datasets';
 import type { FigureScene, SceneNode } from '../../shared/figures/scene';
 import { sceneToSvg } from '../../shared/figures/scene-to-svg';
 import type { ResolvedFigureSpec } from '../../shared/spec/resolve-figure-spec';
@@ -20,6 +21,8 @@ export interface RenderOptions {
   /** TIFF only: convert to CMYK with libvips' default profile (colours shift; see notes). */
   cmyk?: boolean;
   timeoutMs?: number;
+  /** Uploaded points the spec's radial kind draws. */
+  datasets?: FigureDatasets;
 }
 
 export interface RenderedFile {
@@ -58,7 +61,7 @@ export async function renderFigure(
   }
   const { scene, rasterPng, facts } = is3dKind(spec)
     ? await render3d(spec, options)
-    : render2d(spec);
+    : render2d(spec, options.datasets);
   const notes = [...scene.metadata.notes];
   const done = (bytes: Buffer): RenderedFile => ({
     bytes,
@@ -86,12 +89,12 @@ export async function renderFigure(
   }
 }
 
-function render2d(spec: ResolvedFigureSpec): {
+function render2d(spec: ResolvedFigureSpec, datasets?: FigureDatasets): {
   scene: FigureScene;
   rasterPng: null;
   facts: Record<string, unknown>;
 } {
-  const scene = buildFigureScene(spec);
+  const scene = buildFigureScene(spec, datasets);
   const facts = Object.fromEntries(
     scene.metadata.facts.map((f) => [f.name, { value: f.value, unit: f.unit, printed: f.printed }]),
   );

@@ -5,6 +5,8 @@ import { parseHouseStyle } from '../../shared/spec/house-style';
 import { migrateFigureSpec } from '../../shared/spec/migrate-figure-spec';
 import { resolveFigureSpec } from '../../shared/spec/resolve-figure-spec';
 import { renderKey } from '../render/render-key';
+import type { FigureDatasets } from '../../shared/figures/radial-datasets';
+import { loadFigureDatasets } from '../services/figure-render-data';
 import { changedPaths } from '../../shared/spec/changed-paths';
 
 export interface FigureRow {
@@ -58,13 +60,14 @@ function toSummary(r: JoinedRow, printFilesCurrent: boolean): FigureSummary {
 }
 
 /** The render-cache keys of every print format a figure's current spec asks for. */
-function printKeys(r: JoinedRow): string[] {
+function printKeys(r: JoinedRow, datasets: FigureDatasets | undefined): string[] {
   const spec = resolveFigureSpec(migrateFigureSpec(r.spec), parseHouseStyle(r.house_style));
-  return spec.print.formats.map((format) => renderKey(spec, format, false));
+  return spec.print.formats.map((format) => renderKey(spec, format, false, datasets));
 }
 
 async function withRenderState(db: Knex, rows: JoinedRow[]): Promise<FigureSummary[]> {
-  const keys = rows.map(printKeys);
+  const datasets = await Promise.all(rows.map((r) => loadFigureDatasets(db, Number(r.project_id), migrateFigureSpec(r.spec))));
+  const keys = rows.map((r, i) => printKeys(r, datasets[i]));
   const cached = new Set<string>(await db('render_cache').whereIn('key', keys.flat()).pluck('key'));
   return rows.map((r, i) => toSummary(r, keys[i].every((k) => cached.has(k))));
 }

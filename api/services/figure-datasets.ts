@@ -5,7 +5,7 @@ import type { BundleDataset } from '../../shared/api/bundle';
 import type { FigureSpec } from '../../shared/spec/figure-spec';
 import { insertDataset } from '../repositories/datasets';
 
-export function datasetIdsOf(spec: FigureSpec): number[] {
+export function datasetIdsOf(spec: Pick<FigureSpec, 'kind'>): number[] {
   return spec.kind.type === 'radial' ? (spec.kind.datasets ?? []).map((d) => d.id) : [];
 }
 

@@ -7,6 +7,7 @@ import { resolveFigureSpec, type ResolvedFigureSpec } from '../../shared/spec/re
 import { AppError, notFound } from '../lib/app-error';
 import { renderFigure, is3dKind, type RenderFormat } from '../render/render-figure';
 import { renderKey } from '../render/render-key';
+import { loadFigureDatasets } from './figure-render-data';
 
 /** Largest side in pixels of any rendered raster (500 mm at 600 dpi); 3D is limited further by the browser. */
 export const MAX_RASTER_SIDE_PX = 12_000;
@@ -67,9 +68,12 @@ export async function renderResolvedSpec(
   spec: ResolvedFigureSpec,
   format: RenderFormat,
   cmyk: boolean,
+  /** The figure's project, whose uploaded data sets the spec may draw. */
+  projectId?: number,
 ): Promise<Omit<RenderedFigure, 'filename'>> {
   checkRenderLimits(spec, format);
-  const key = renderKey(spec, format, cmyk);
+  const datasets = projectId === undefined ? undefined : await loadFigureDatasets(db, projectId, spec);
+  const key = renderKey(spec, format, cmyk, datasets);
   const cached = await db('render_cache').where({ key }).first();
   if (cached) {
     await db('render_cache').where({ key }).update({ used_at: db.fn.now() });
@@ -82,7 +86,7 @@ export async function renderResolvedSpec(
       fromCache: true,
     };
   }
-  const file = await withRenderSlot(() => renderFigure(spec, format, { cmyk }));
+  const file = await withRenderSlot(() => renderFigure(spec, format, { cmyk, datasets }));
   await db('render_cache')
     .insert({
       key,
@@ -107,13 +111,13 @@ export async function renderStoredFigure(
     .join('projects as p', 'p.id', 'f.project_id')
     .where('f.id', figureId)
     .whereNull('f.deleted_at')
-    .first('f.id', 'f.number', 'f.current_revision', 'p.house_style');
+    .first('f.id', 'f.project_id', 'f.number', 'f.current_revision', 'p.house_style');
   if (!figure) throw notFound('figure');
   const rev = revision ?? figure.current_revision;
   const row = await db('figure_revisions').where({ figure_id: figureId, revision: rev }).first('spec');
   if (!row) throw notFound('revision');
   const spec = resolveFigureSpec(migrateFigureSpec(row.spec), parseHouseStyle(figure.house_style));
-  const rendered = await renderResolvedSpec(db, spec, format, cmyk);
+  const rendered = await renderResolvedSpec(db, spec, format, cmyk, Number(figure.project_id));
   const ext = format === 'tiff' ? 'tif' : format;
   const base = figure.number ? `figure-${figure.number}` : `figure-${figure.id}`;
   return { ...rendered, filename: `${base.replace(/[^0-9A-Za-z.-]/g, '_')}-r${rev}.${ext}` };

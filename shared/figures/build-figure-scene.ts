@@ -9,12 +9,14 @@ import { buildLevelsScene } from './build-levels-scene';
 import { buildRadialScene } from './build-radial-scene';
 import { buildSliceScene } from './build-slice-scene';
 import { FigureSpecError } from './figure-error';
+import type { FigureDatasets } from './radial-datasets';
 import type { FigureScene } from './scene';
 
-export function buildFigureScene(spec: ResolvedFigureSpec): FigureScene {
+/** `datasets`: the uploaded points a radial figure's kind.datasets name, resolved by the caller. */
+export function buildFigureScene(spec: ResolvedFigureSpec, datasets?: FigureDatasets): FigureScene {
   switch (spec.kind.type) {
     case 'radial':
-      return buildRadialScene(spec);
+      return buildRadialScene(spec, datasets);
     case 'slice':
       return buildSliceScene(spec);
     case 'levels':

@@ -8,7 +8,8 @@
  * radius-enclosing-probability, effective-potential; sources named there). Lengths are computed in
  * bohr and printed in the spec's unit; R is printed in unit^(−3/2), r²R² in unit^(−1), so the
  * printed curves stay normalised in the printed unit. Energies: hartree with bohr, eV with pm or Å.
- * kind.rMax is in bohr, like every extent in the spec.
+ * kind.rMax is in bohr, like every extent in the spec. Uploaded data sets named in kind.datasets
+ * are drawn in the panel of their quantity from the points the caller passes (radial-datasets.ts).
  */
 import { HARTREE_EV } from '../physics/constants';
 import { effectivePotentialCurve, type BoundLevel } from '../physics/effective-potential';
@@ -19,6 +20,7 @@ import { cumulativeRadialProbability } from '../physics/radial-probability';
 import { radiusEnclosingProbability } from '../physics/radius-enclosing-probability';
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
 import { clipPolyline } from './clip-polyline';
+import { dataSeriesNodes, dataSeriesOf, seriesRange, type DataSeries, type FigureDatasets } from './radial-datasets';
 import { FigureSpecError } from './figure-error';
 import { sceneForSpec } from './scene-for-spec';
 import { figureStyle, type FigureStyle } from './figure-style';
@@ -72,6 +74,7 @@ interface Context {
   energyUnit: { symbol: string; perHartree: number };
   facts: SceneFact[];
   colourOf: (c: Curve) => Stroke;
+  dataStroke: (s: DataSeries) => Stroke;
 }
 
 const italic = (t: string): TextRun => ({ text: t, shift: 'base', italic: true });
@@ -135,7 +138,19 @@ function autoRange(curves: readonly Curve[], ctx: Context): number {
 interface Panel {
   quantity: Quantity;
   curves: Curve[];
+  data: DataSeries[];
 }
+
+/** A data value in the printed unit of its panel (R and r²R² scale with the length unit). */
+function printedData(s: DataSeries, v: number, ctx: Context): number {
+  const p = ctx.unit.perBohr;
+  if (s.panel === 'R') return v / Math.pow(p, 1.5);
+  if (s.panel === 'r2R2') return v / p;
+  return v * ctx.energyUnit.perHartree;
+}
+
+const dataLegend = (panel: Panel, ctx: Context): LegendEntry[] =>
+  panel.data.map((s) => ({ runs: [plain(s.label)], stroke: ctx.dataStroke(s) }));
 
 function checkCurves(kind: RadialKind): void {
   kind.curves.forEach((c, i) => {
@@ -177,8 +192,9 @@ interface FunctionData {
 function functionData(panel: Panel, rMaxBohr: number, ctx: Context): FunctionData {
   const rs = Array.from({ length: SAMPLES + 1 }, (_, i) => (rMaxBohr * i) / SAMPLES);
   const series = panel.curves.map((c) => rs.map((r) => curveValue(c, r, ctx)));
-  let lo = 0;
-  let hi = 0;
+  const fromData = seriesRange(panel.data, rMaxBohr, (s, v) => printedData(s, v, ctx));
+  let lo = Math.min(0, fromData.lo);
+  let hi = Math.max(0, fromData.hi);
   for (const s of series)
     for (const v of s) {
       lo = Math.min(lo, v);
@@ -236,11 +252,13 @@ function functionPanel(
       drawn.push(...piece);
     }
   });
+  for (const s of panel.data)
+    nodes.push(...dataSeriesNodes(s, X, (v) => Y(printedData(s, v, ctx)), frame, ctx.dataStroke(s), drawn));
   placer.avoidCurve(drawn);
-  const entries: LegendEntry[] = panel.curves.map((c) => ({
-    runs: shellRuns(c.n, c.l),
-    stroke: ctx.colourOf(c),
-  }));
+  const entries: LegendEntry[] = [
+    ...panel.curves.map((c) => ({ runs: shellRuns(c.n, c.l), stroke: ctx.colourOf(c) })),
+    ...dataLegend(panel, ctx),
+  ];
   const key = legendAvoiding(entries, frame, style.smallSizePt, style.ink, drawn);
   placer.occupy(key.box);
   nodes.push(...key.nodes);
@@ -343,6 +361,11 @@ function potentialAxis(panel: Panel, ctx: Context): AxisDef {
     lo = Math.min(lo, l === 0 ? 1.6 * lowest : 1.25 * Math.min(lowest, vMin));
   }
   const e = ctx.energyUnit.perHartree;
+  if (panel.curves.length === 0) {
+    // Only uploaded potentials: the axis spans their values (in the printed energy unit).
+    const { lo: dLo, hi: dHi } = seriesRange(panel.data, Infinity, (s, v) => printedData(s, v, ctx));
+    return makeAxis(Math.min(0, dLo), Math.max(0, dHi) + 0.05 * (dHi - dLo), quantityTitle('veff'), quantityUnit('veff', ctx));
+  }
   return makeAxis(lo * e, 0.4 * Math.abs(lo) * e, quantityTitle('veff'), quantityUnit('veff', ctx));
 }
 
@@ -396,6 +419,8 @@ function potentialPanel(
       if (level) pending.push({ c, level, stroke });
     }
   }
+  for (const s of panel.data) nodes.push(...dataSeriesNodes(s, X, Y, frame, ctx.dataStroke(s), drawn));
+  entries.push(...dataLegend(panel, ctx));
   placer.avoidCurve(drawn);
   const key = legendAvoiding(entries, frame, style.smallSizePt, style.ink, drawn);
   placer.occupy(key.box);
@@ -440,7 +465,7 @@ function potentialPanel(
   return nodes;
 }
 
-export function buildRadialScene(spec: ResolvedFigureSpec): FigureScene {
+export function buildRadialScene(spec: ResolvedFigureSpec, datasets?: FigureDatasets): FigureScene {
   if (spec.kind.type !== 'radial')
     throw new FigureSpecError('kind.type', `expected "radial", got "${spec.kind.type}"`);
   const kind = spec.kind;
@@ -471,17 +496,29 @@ export function buildRadialScene(spec: ResolvedFigureSpec): FigureScene {
         : { symbol: 'eV', perHartree: HARTREE_EV },
     facts: [],
     colourOf: (c) => strokes.get(curveKey(c)) as Stroke,
+    // Data sets take the colours after the computed curves', drawn solid (the points carry marks when sparse).
+    dataStroke: (s) => ({
+      colour: style.curveColours[(distinct.length + data.series.indexOf(s)) % style.curveColours.length],
+      widthPt: style.lineWidthPt * 1.1,
+      join: 'round',
+    }),
   };
+  const data = dataSeriesOf(spec, datasets);
 
   const panels: Panel[] = [];
   for (const c of kind.curves) {
     const panel = panels.find((p) => p.quantity === c.quantity);
     if (panel) panel.curves.push(c);
-    else panels.push({ quantity: c.quantity, curves: [c] });
+    else panels.push({ quantity: c.quantity, curves: [c], data: [] });
+  }
+  for (const s of data.series) {
+    const panel = panels.find((p) => p.quantity === s.panel);
+    if (panel) panel.data.push(s);
+    else panels.push({ quantity: s.panel, curves: [], data: [s] });
   }
 
   const fixed = kind.rMax !== undefined;
-  const rMaxBohr = kind.rMax ?? autoRange(kind.curves, ctx);
+  const rMaxBohr = kind.rMax ?? Math.max(autoRange(kind.curves, ctx), ...data.series.map((s) => s.r[s.r.length - 1]));
   const xAxis = makeAxis(0, rMaxBohr * unit.perBohr, [italic('r')], [plain(unit.symbol)], fixed);
   const xEndBohr = (xAxis.ticks.max * Math.pow(10, xAxis.exponent)) / unit.perBohr;
 
@@ -541,8 +578,9 @@ export function buildRadialScene(spec: ResolvedFigureSpec): FigureScene {
   };
   const title = `Radial plot of ${names.join(', ')} (${describeSystem(spec)})`;
   const facts = ctx.facts.map((f) => `${f.name}: ${f.printed}`).join('; ');
-  const altText = `${panels.map((p) => `${quantityWords[p.quantity]} of ${p.curves.map((c) => runsText(shellRuns(c.n, c.l))).join(', ')}`).join('; ')}, against r from 0 to ${formatSignificant(xEndBohr * unit.perBohr, 3)} ${unit.symbol}.${facts ? ` ${facts}.` : ''}`;
-  const notes: string[] = [];
+  const drawnNames = (p: Panel) => [...p.curves.map((c) => runsText(shellRuns(c.n, c.l))), ...p.data.map((s) => `data "${s.label}"`)];
+  const altText = `${panels.map((p) => `${quantityWords[p.quantity]} of ${drawnNames(p).join(', ')}`).join('; ')}, against r from 0 to ${formatSignificant(xEndBohr * unit.perBohr, 3)} ${unit.symbol}.${facts ? ` ${facts}.` : ''}`;
+  const notes: string[] = [...data.notes];
   if (spec.system.nucleus !== 'infinite')
     notes.push(
       'Lengths are printed in units of the Bohr radius a0 (not the reduced-mass radius); the reduced mass enters the curves themselves.',

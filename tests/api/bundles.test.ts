@@ -8,12 +8,16 @@ import { demo, signedIn, type ApiClient, type Json } from '../support/api-client
 import { startTestServer, type TestServer } from '../support/test-server';
 
 let server: TestServer;
+let seeded: number[];
 let owner: ApiClient, editor: ApiClient, reviewer: ApiClient, viewer: ApiClient, admin: ApiClient;
 let chapter4: number;
 let course: number;
+/** The project the round trip makes; later tests import and copy into it, so the demo projects stay as they were. */
+let imported: number;
 
 beforeAll(async () => {
   server = await startTestServer(inject('databaseUrl'));
+  seeded = await server.db('projects').pluck('id');
   [owner, editor, reviewer, viewer, admin] = await Promise.all(
     [demo.owner, demo.editor, demo.reviewer, demo.viewer, demo.admin].map((e) =>
       signedIn(server.baseUrl, e),
@@ -23,7 +27,11 @@ beforeAll(async () => {
   chapter4 = projects.find((p: { name: string }) => p.name.startsWith('Atoms & Bonds')).id;
   course = projects.find((p: { id: number }) => p.id !== chapter4).id;
 });
-afterAll(async () => server.stop());
+afterAll(async () => {
+  // Projects made here are archived, so other test files see the demo users' project lists as seeded.
+  await server.db('projects').whereNotIn('id', seeded).update({ archived_at: server.db.fn.now() });
+  await server.stop();
+});
 
 const upload = (c: ApiClient, path: string, content: string | Buffer) =>
   c.upload(path, {
@@ -103,6 +111,7 @@ describe('export', () => {
 
 describe('round trip', () => {
   it('when a project bundle is imported as a new project, then specs, texts, house style and rendered SVG bytes are identical', async () => {
+    const stored = await server.db('projects').where({ id: chapter4 }).first('house_style');
     await owner.put(`/api/projects/${chapter4}/house-style`, {
       look: { lineWidthPt: 0.7 },
       print: { widthMm: 120 },
@@ -111,6 +120,7 @@ describe('round trip', () => {
     const r = await upload(editor, '/api/projects/import', exported.bytes);
     expect(r.status).toBe(201);
     const report = importReportSchema.parse(r.body);
+    imported = report.projectId;
     expect(report.renamed).toEqual([]);
     expect(report.skipped).toEqual([]);
 
@@ -147,6 +157,10 @@ describe('round trip', () => {
 
     const reexported = await editor.getBytes(`/api/projects/${report.projectId}/bundle`);
     expect(reexported.bytes.equals(exported.bytes)).toBe(true);
+    await server
+      .db('projects')
+      .where({ id: chapter4 })
+      .update({ house_style: JSON.stringify(stored.house_style) });
     const audit = await server
       .db('audit_entries')
       .where({ project_id: report.projectId, action: 'bundle.imported' });
@@ -253,15 +267,15 @@ describe('refused uploads change nothing', () => {
 
 describe('import into a project', () => {
   it('when numbers clash, then the figures are renumbered and reported, and identical figures are skipped', async () => {
-    const fig = (await owner.get(`/api/projects/${chapter4}/figures`)).body.find(
+    const fig = (await editor.get(`/api/projects/${imported}/figures`)).body.find(
       (f: { number: string }) => f.number === '4.2',
     );
     const one = JSON.parse(
-      (await owner.getBytes(`/api/figures/${fig.id}/bundle`)).bytes.toString('utf8'),
+      (await editor.getBytes(`/api/figures/${fig.id}/bundle`)).bytes.toString('utf8'),
     );
     expect(one.figures).toHaveLength(1);
 
-    const same = await upload(editor, `/api/projects/${chapter4}/import`, JSON.stringify(one));
+    const same = await upload(editor, `/api/projects/${imported}/import`, JSON.stringify(one));
     expect(same.status).toBe(200);
     expect(same.body).toMatchObject({
       imported: [],
@@ -270,14 +284,14 @@ describe('import into a project', () => {
     });
 
     one.figures[0].title = 'Radial distributions, second take';
-    const first = await upload(editor, `/api/projects/${chapter4}/import`, JSON.stringify(one));
+    const first = await upload(editor, `/api/projects/${imported}/import`, JSON.stringify(one));
     expect(first.body).toMatchObject({
       imported: [{ number: '4.2-2' }],
       renamed: [{ from: '4.2', to: '4.2-2' }],
       skipped: [],
     });
     one.figures[0].title = 'Radial distributions, third take';
-    const second = await upload(editor, `/api/projects/${chapter4}/import`, JSON.stringify(one));
+    const second = await upload(editor, `/api/projects/${imported}/import`, JSON.stringify(one));
     expect(second.body).toMatchObject({ renamed: [{ from: '4.2', to: '4.2-3' }] });
   });
 
@@ -294,24 +308,25 @@ describe('import into a project', () => {
 describe('copy between projects', () => {
   it('when an editor of both projects copies a figure, then the copy has the same spec and texts, a free number, and both projects record it', async () => {
     const src = (await figuresOf(editor, chapter4)).find((f) => f.number === '4.6')!;
-    const a = await editor.post(`/api/figures/${src.id}/copy`, { projectId: course });
+    // The imported project starts with its own 4.6, so the copies are numbered 4.6-2 and 4.6-3.
+    const a = await editor.post(`/api/figures/${src.id}/copy`, { projectId: imported });
     expect(a.status).toBe(201);
     const copy = figureSchema.parse(a.body);
     expect(copy).toMatchObject({
-      projectId: course,
-      number: '4.6',
+      projectId: imported,
+      number: '4.6-2',
       title: src.title,
       caption: src.caption,
       revision: 1,
       status: 'draft',
     });
     expect(canonicalJson(copy.spec)).toBe(canonicalJson(src.spec));
-    const again = await editor.post(`/api/figures/${src.id}/copy`, { projectId: course });
-    expect(again.body.number).toBe('4.6-2');
+    const again = await editor.post(`/api/figures/${src.id}/copy`, { projectId: imported });
+    expect(again.body.number).toBe('4.6-3');
     const entries = await server
       .db('audit_entries')
       .where({ action: 'figure.copied' })
-      .whereIn('project_id', [chapter4, course]);
+      .whereIn('project_id', [chapter4, imported]);
     expect(entries.length).toBe(4);
   });
 

@@ -9,27 +9,40 @@ import { startTestServer, type TestServer } from '../support/test-server';
 const A0_PM = 52.9177210544;
 
 let server: TestServer;
+let seeded: number[];
 let owner: ApiClient, editor: ApiClient, reviewer: ApiClient, viewer: ApiClient, admin: ApiClient;
-let chapter4: number;
+let dataProject: number;
 
 beforeAll(async () => {
   server = await startTestServer(inject('databaseUrl'));
+  seeded = await server.db('projects').pluck('id');
   [owner, editor, reviewer, viewer, admin] = await Promise.all(
     [demo.owner, demo.editor, demo.reviewer, demo.viewer, demo.admin].map((e) =>
       signedIn(server.baseUrl, e),
     ),
   );
-  chapter4 = (await owner.get('/api/projects')).body.find((p: { name: string }) =>
-    p.name.startsWith('Atoms & Bonds'),
-  ).id;
+  // A project of its own, so the demo projects stay as other test files expect them.
+  dataProject = (await owner.post('/api/projects', { name: 'Radial data' })).body.id;
+  for (const [email, role] of [
+    [demo.editor, 'editor'],
+    [demo.reviewer, 'reviewer'],
+    [demo.viewer, 'viewer'],
+  ])
+    expect((await owner.post(`/api/projects/${dataProject}/members`, { email, role })).status).toBe(
+      201,
+    );
 });
-afterAll(async () => server.stop());
+afterAll(async () => {
+  // Projects made here are archived, so other test files see the demo users' project lists as seeded.
+  await server.db('projects').whereNotIn('id', seeded).update({ archived_at: server.db.fn.now() });
+  await server.stop();
+});
 
 const uploadCsv = (
   c: ApiClient,
   csv: string,
   fields: Record<string, string> = { name: 'Hartree–Fock 2s' },
-  projectId = chapter4,
+  projectId = dataProject,
 ) =>
   c.upload(
     `/api/projects/${projectId}/datasets`,
@@ -66,7 +79,7 @@ describe('upload', () => {
     expect(d.rMaxBohr).toBeCloseTo(300 / A0_PM, 14);
     const audit = await server
       .db('audit_entries')
-      .where({ project_id: chapter4, action: 'dataset.uploaded' })
+      .where({ project_id: dataProject, action: 'dataset.uploaded' })
       .orderBy('id');
     expect(audit.at(-1).summary).toMatch(/"Tabulated 1s" \(R, 9 points, pm \/ pm\^-3\/2\)/);
   });
@@ -106,7 +119,7 @@ describe('upload', () => {
     const noName = await uploadCsv(editor, onesCsv, { name: ' ' });
     expect(noName.status).toBe(400);
     expect(noName.body.error.fields.name).toBe('give the data set a name');
-    const noFile = await editor.post(`/api/projects/${chapter4}/datasets`, { name: 'x' });
+    const noFile = await editor.post(`/api/projects/${dataProject}/datasets`, { name: 'x' });
     expect(noFile.status).toBe(400);
     expect(noFile.body.error.fields.file).toMatch(/choose a CSV file/);
     const big = await uploadCsv(editor, 'r_bohr,R_bohr^-3/2\n' + '1,1\n'.repeat(600_000));
@@ -123,8 +136,8 @@ describe('roles', () => {
     expect((await uploadCsv(reviewer, onesCsv)).status).toBe(403);
     expect((await uploadCsv(admin, onesCsv)).status).toBe(404);
     expect(await datasetRows()).toBe(before);
-    const id = (await viewer.get(`/api/projects/${chapter4}/datasets`)).body[0].id;
-    expect((await admin.get(`/api/projects/${chapter4}/datasets`)).status).toBe(404);
+    const id = (await viewer.get(`/api/projects/${dataProject}/datasets`)).body[0].id;
+    expect((await admin.get(`/api/projects/${dataProject}/datasets`)).status).toBe(404);
     expect((await admin.get(`/api/datasets/${id}`)).status).toBe(404);
     expect((await admin.delete(`/api/datasets/${id}`)).status).toBe(404);
     expect((await viewer.delete(`/api/datasets/${id}`)).status).toBe(403);
@@ -133,7 +146,7 @@ describe('roles', () => {
   });
 
   it('when a viewer lists and opens data sets, then the list has no points and the data set has them', async () => {
-    const list = (await viewer.get(`/api/projects/${chapter4}/datasets`)).body;
+    const list = (await viewer.get(`/api/projects/${dataProject}/datasets`)).body;
     expect(list.length).toBeGreaterThanOrEqual(2);
     const first = datasetSummarySchema.strict().parse(list[0]);
     const one = datasetSchema.parse((await viewer.get(`/api/datasets/${first.id}`)).body);
@@ -144,5 +157,65 @@ describe('roles', () => {
     const id = (await uploadCsv(editor, onesCsv, { name: 'Temporary' })).body.id;
     expect((await editor.delete(`/api/datasets/${id}`)).status).toBe(204);
     expect((await viewer.get(`/api/datasets/${id}`)).status).toBe(404);
+  });
+});
+
+describe('radial figures drawing data', () => {
+  const spec = (datasets: { id: number; label?: string }[]) => ({
+    schemaVersion: 1,
+    state: { terms: [{ n: 1, l: 0, m: 0 }] },
+    kind: { type: 'radial', curves: [{ n: 1, l: 0, quantity: 'R' }], rMax: 6, datasets },
+    print: { formats: ['svg'] },
+  });
+  const svgOf = async (figureId: number) => {
+    const r = await viewer.getBytes(`/api/figures/${figureId}/render?format=svg`);
+    expect(r.status).toBe(200);
+    return {
+      text: r.bytes.toString('utf8'),
+      notes: JSON.parse(decodeURIComponent(r.headers.get('x-lobewright-notes') ?? '[]')),
+    };
+  };
+
+  it('when a radial figure names a data set, then its SVG draws it with the legend label, and deleting the data set is refused while drawn', async () => {
+    const data = (await uploadCsv(editor, onesCsv, { name: 'Tabulated 1s' })).body;
+    const fig = (
+      await editor.post(`/api/projects/${dataProject}/figures`, {
+        title: 'R of 1s with data',
+        spec: spec([{ id: data.id }]),
+      })
+    ).body;
+    const svg = await svgOf(fig.id);
+    expect(svg.text).toContain('>Tabulated 1s</tspan>');
+    expect(svg.text).toContain('data &quot;Tabulated 1s&quot;');
+    expect(svg.notes).toEqual([]);
+
+    const labelled = (
+      await editor.post(`/api/projects/${dataProject}/figures`, {
+        title: 'Labelled',
+        spec: spec([{ id: data.id, label: 'HF 1s' }]),
+      })
+    ).body;
+    expect((await svgOf(labelled.id)).text).toContain('>HF 1s</tspan>');
+
+    const refused = await editor.delete(`/api/datasets/${data.id}`);
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.code).toBe('dataset_in_use');
+    expect((await viewer.get(`/api/datasets/${data.id}`)).status).toBe(200);
+  });
+
+  it('when a figure names a data set of another project, then it is not drawn and the render notes say so', async () => {
+    const other = (await owner.post('/api/projects', { name: 'Other data' })).body.id;
+    const foreign = (await uploadCsv(owner, onesCsv, { name: 'Foreign data' }, other)).body;
+    const fig = (
+      await editor.post(`/api/projects/${dataProject}/figures`, {
+        title: 'Foreign',
+        spec: spec([{ id: foreign.id }]),
+      })
+    ).body;
+    const svg = await svgOf(fig.id);
+    expect(svg.text).not.toContain('Foreign data');
+    expect(svg.notes).toEqual([
+      `Data set ${foreign.id} is not in this project, so it is not drawn.`,
+    ]);
   });
 });
