@@ -6,6 +6,7 @@
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
 import { buildAngularCurveScene } from './build-angular-curve-scene';
 import { buildLevelsScene } from './build-levels-scene';
+import { buildPotentialScene } from './build-potential-scene';
 import { buildRadialScene } from './build-radial-scene';
 import { buildSliceScene } from './build-slice-scene';
 import { FigureSpecError } from './figure-error';
@@ -21,6 +22,8 @@ export function buildFigureScene(spec: ResolvedFigureSpec, datasets?: FigureData
       return buildSliceScene(spec);
     case 'levels':
       return buildLevelsScene(spec);
+    case 'potential':
+      return buildPotentialScene(spec);
     case 'angular':
       if (spec.kind.mode === 'curve') return buildAngularCurveScene(spec);
       throw new FigureSpecError(
