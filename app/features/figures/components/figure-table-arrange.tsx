@@ -5,6 +5,7 @@ import { useEffect, useRef, useState, type DragEvent, type KeyboardEvent } from 
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/form-field';
 import { FormAlert } from '../../../components/ui/status';
+import { isApiError } from '../../../lib/api-client';
 import {
   apiFieldErrors,
   formErrorMessage,
@@ -67,6 +68,7 @@ export function FigureTableArrange({ projectId, figures, onDone }: ArrangeProps)
   const twice = duplicateNumbers(arranged);
   const changed = arrangementChanged(saved, arranged);
   const allErrors: FieldErrors = { ...apiFieldErrors(reorder.error), ...errors };
+  const listChanged = isApiError(reorder.error, 'incomplete_order');
 
   // Moving a row moves its DOM node, which drops focus: put it back, so that Alt+↑ or the same
   // button can be pressed again and again.
@@ -152,8 +154,29 @@ export function FigureTableArrange({ projectId, figures, onDone }: ArrangeProps)
         </p>
       </div>
 
-      <FormAlert message={formErrorMessage(reorder.error, Object.keys(allErrors))} />
-      {allErrors.figures && <FormAlert message={allErrors.figures} />}
+      {listChanged ? (
+        <div
+          role="alert"
+          className="flex flex-wrap items-center gap-3 rounded-md border border-amber-300 bg-amber-50 px-3 py-2 text-sm text-amber-950"
+        >
+          Someone added or removed a figure meanwhile, so this order no longer covers the whole
+          list.
+          <Button
+            size="sm"
+            onClick={() => {
+              setArranged(figures.map(({ id, number }) => ({ id, number })));
+              reorder.reset();
+            }}
+          >
+            Start again from the current list
+          </Button>
+        </div>
+      ) : (
+        <>
+          <FormAlert message={formErrorMessage(reorder.error, Object.keys(allErrors))} />
+          {allErrors.figures && <FormAlert message={allErrors.figures} />}
+        </>
+      )}
       <p role="status" className="sr-only">
         {announcement}
       </p>
