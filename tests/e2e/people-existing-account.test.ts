@@ -5,7 +5,8 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStack, type Stack } from '../support/stack';
-import { launchChromium, saveScreenshot, watchForProblems } from './support/chromium';
+import { launchChromium, saveScreenshot } from './support/chromium';
+import { freshPage } from './support/fresh-page';
 import { mailedLink } from './support/mail-link';
 import { DEMO_PASSWORD, signIn } from './support/sign-in';
 
@@ -18,12 +19,7 @@ describe('invitations to existing accounts, e-mail change and revision changes',
   let browser: Browser;
   let problems: string[];
 
-  async function freshPage(): Promise<Page> {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 1000 } });
-    const page = await context.newPage();
-    problems.push(...watchForProblems(page));
-    return page;
-  }
+  const newPage = () => freshPage(browser, problems);
 
   beforeAll(async () => {
     stack = await startStack({ mail: true });
@@ -39,7 +35,7 @@ describe('invitations to existing accounts, e-mail change and revision changes',
   let invitationPath: string;
 
   it('when the owner invites an address that has an account, then a link is mailed to it', async () => {
-    const owner = await freshPage();
+    const owner = await newPage();
     await signIn(owner, stack.baseUrl, 'ada.okafor@harrowgate.example');
     await owner.getByRole('link', { name: PROJECT }).click();
     await owner.getByRole('navigation', { name: 'Project' }).getByRole('link', { name: 'Members' }).click();
@@ -55,7 +51,7 @@ describe('invitations to existing accounts, e-mail change and revision changes',
   let page: Page;
 
   it('when someone else is signed in on the browser, then the page asks them to sign out first', async () => {
-    page = await freshPage();
+    page = await newPage();
     await signIn(page, stack.baseUrl, 'ravi.mendes@harrowgate.example');
     await page.goto(`${stack.baseUrl}${invitationPath}`);
     await page
@@ -97,7 +93,7 @@ describe('invitations to existing accounts, e-mail change and revision changes',
   });
 
   it('when an editor changes a figure’s title, then its revision says it changed the title', async () => {
-    const editor = await freshPage();
+    const editor = await newPage();
     await signIn(editor, stack.baseUrl, 'ravi.mendes@harrowgate.example');
     await editor.getByRole('link', { name: PROJECT }).click();
     await editor.getByRole('link', { name: 'The 1s orbital', exact: true }).click();

@@ -5,7 +5,8 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStack, type Stack } from '../support/stack';
-import { launchChromium, saveScreenshot, watchForProblems } from './support/chromium';
+import { launchChromium, saveScreenshot } from './support/chromium';
+import { freshPage } from './support/fresh-page';
 import { mailedLink } from './support/mail-link';
 import { DEMO_PASSWORD, signIn } from './support/sign-in';
 
@@ -19,12 +20,7 @@ describe('invitations, password reset, account page, audit trail and user list',
   let browser: Browser;
   let problems: string[];
 
-  async function freshPage(): Promise<Page> {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 1000 } });
-    const page = await context.newPage();
-    problems.push(...watchForProblems(page));
-    return page;
-  }
+  const newPage = () => freshPage(browser, problems);
 
   async function openTab(page: Page, name: string): Promise<void> {
     await page.getByRole('navigation', { name: 'Project' }).getByRole('link', { name }).click();
@@ -45,7 +41,7 @@ describe('invitations, password reset, account page, audit trail and user list',
   let invitationPath: string;
 
   it('when the owner invites a new address from the members page, then it is listed as waiting and a link is mailed', async () => {
-    owner = await freshPage();
+    owner = await newPage();
     await signIn(owner, stack.baseUrl, 'ada.okafor@harrowgate.example');
     await owner.getByRole('link', { name: PROJECT }).click();
     await openTab(owner, 'Members');
@@ -83,7 +79,7 @@ describe('invitations, password reset, account page, audit trail and user list',
     await dialog.getByRole('button', { name: 'Withdraw' }).click();
     await owner.getByRole('rowheader', { name: 'someone.else@example.org' }).waitFor({ state: 'detached' });
 
-    const stranger = await freshPage();
+    const stranger = await newPage();
     await stranger.goto(`${stack.baseUrl}${withdrawnPath}`);
     await stranger.getByText('This invitation was withdrawn').waitFor();
     await stranger.context().close();
@@ -92,7 +88,7 @@ describe('invitations, password reset, account page, audit trail and user list',
   let invitee: Page;
 
   it('when the invitee opens the mailed link, creates the account and joins, then the project opens', async () => {
-    invitee = await freshPage();
+    invitee = await newPage();
     await invitee.goto(`${stack.baseUrl}${invitationPath}`);
     await invitee.getByRole('heading', { level: 1, name: 'Join a project' }).waitFor();
     await invitee.getByText(`Ada Okafor invited ${INVITEE} to join ${PROJECT} as editor.`).waitFor();
@@ -136,7 +132,7 @@ describe('invitations, password reset, account page, audit trail and user list',
   });
 
   it('when a viewer opens the project, then there is no Audit tab', async () => {
-    const viewer = await freshPage();
+    const viewer = await newPage();
     await signIn(viewer, stack.baseUrl, 'tomas.reyes@fennwick.example');
     await viewer.getByRole('link', { name: PROJECT }).click();
     await viewer.getByRole('navigation', { name: 'Project' }).getByRole('link', { name: 'Members' }).waitFor();
@@ -149,7 +145,7 @@ describe('invitations, password reset, account page, audit trail and user list',
   let resetPath: string;
 
   it('when someone forgot the password, then the mailed link sets a new one and signs them in', async () => {
-    ravi = await freshPage();
+    ravi = await newPage();
     await ravi.goto(`${stack.baseUrl}/sign-in`);
     await ravi.getByRole('link', { name: 'Forgot password?' }).click();
     await ravi.getByRole('heading', { level: 1, name: 'Forgot your password?' }).waitFor();
@@ -168,7 +164,7 @@ describe('invitations, password reset, account page, audit trail and user list',
   });
 
   it('when the reset link is used again, then it is refused and a new one is offered', async () => {
-    const other = await freshPage();
+    const other = await newPage();
     await other.goto(`${stack.baseUrl}${resetPath}`);
     await other.getByLabel('New password', { exact: true }).fill('yet-another-password');
     await other.getByRole('button', { name: 'Save new password' }).click();
@@ -213,7 +209,7 @@ describe('invitations, password reset, account page, audit trail and user list',
   });
 
   it('when the site administrator disables an account, then the user list marks it', async () => {
-    const admin = await freshPage();
+    const admin = await newPage();
     await signIn(admin, stack.baseUrl, 'admin@lobewright.example');
     await admin.getByRole('link', { name: 'Site settings' }).click();
     const users = admin.getByRole('table', { name: 'Accounts on this site' });

@@ -1,6 +1,7 @@
 // The whole product for browser tests: a fresh database with the demo data, and the server serving
 // the built client (scripts/test builds it into dist/app first); with { mail: true } outgoing mail
-// goes to a local SMTP fake whose messages the test can read.
+// goes to a local SMTP fake whose messages the test can read. LOBEWRIGHT_CLIENT_DIST names another
+// build folder, so a test run is not disturbed by a rebuild of dist/app in the same checkout.
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { loadDemoData } from '../../db/demo-data';
@@ -16,9 +17,9 @@ export interface Stack {
 }
 
 export async function startStack(options: { mail?: boolean } = {}): Promise<Stack> {
-  const dist = path.resolve('dist/app');
+  const dist = path.resolve(process.env.LOBEWRIGHT_CLIENT_DIST ?? 'dist/app');
   if (!existsSync(path.join(dist, 'index.html'))) {
-    throw new Error('dist/app/index.html is missing: build the client first (npx vite build; scripts/test does it)');
+    throw new Error(`${dist}/index.html is missing: build the client first (npx vite build; scripts/test does it)`);
   }
   const url = await createTestDatabase(`lw_e2e_${process.pid}`);
   await withDb(url, (db) => loadDemoData(db, 4));
