@@ -10,6 +10,7 @@ import { buildPotentialScene } from './build-potential-scene';
 import { buildRadialScene } from './build-radial-scene';
 import { buildSliceScene } from './build-slice-scene';
 import { FigureSpecError } from './figure-error';
+import { buildSolvedLevelsScene } from './solved-levels-scene';
 import type { FigureDatasets } from './radial-datasets';
 import type { FigureScene } from './scene';
 
@@ -21,7 +22,7 @@ export function buildFigureScene(spec: ResolvedFigureSpec, datasets?: FigureData
     case 'slice':
       return buildSliceScene(spec);
     case 'levels':
-      return buildLevelsScene(spec);
+      return spec.kind.compare ? buildSolvedLevelsScene(spec) : buildLevelsScene(spec);
     case 'potential':
       return buildPotentialScene(spec);
     case 'angular':

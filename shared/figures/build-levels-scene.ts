@@ -63,7 +63,7 @@ export function lineName(line: Pick<SpectralLine, 'series' | 'nUpper' | 'nLower'
  * Moves label baselines apart (at least `gap`) while keeping each group of crowded labels centred
  * on the levels it names (clusters merged until none overlap), never above `topBound`.
  */
-function spreadLabels(desired: readonly number[], gap: number, topBound: number): number[] {
+export function spreadLabels(desired: readonly number[], gap: number, topBound: number): number[] {
   const order = desired.map((y, i) => ({ y, i })).sort((a, b) => a.y - b.y);
   type Cluster = { items: typeof order; top: number };
   const place = (items: typeof order): number => {
