@@ -1,5 +1,5 @@
 // What an invitation link offers: who invited whom to which project with which role, and the one
-// step left — join with the signed-in account, sign in first, or create the account here.
+// step left — join with the signed-in account, sign in (or out) first, or create the account here.
 import { useState, type FormEvent, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/form-field';
@@ -27,14 +27,30 @@ interface AcceptInvitationProps {
 }
 
 export function AcceptInvitation(props: AcceptInvitationProps) {
-  const { invitation } = props;
+  const { invitation, signedInEmail, signOutControl } = props;
+  // Someone else's session would stay signed in after accepting, so they step aside first.
+  const someoneElse = signedInEmail !== null && !sameAddress(signedInEmail, invitation.email);
   return (
     <div className="space-y-4">
       <p className="text-stone-800">
         {invitation.invitedBy} invited <strong>{invitation.email}</strong> to join{' '}
         <strong>{invitation.projectName}</strong> as {roleName(invitation.role).toLowerCase()}.
       </p>
-      {invitation.accountExists ? <ExistingAccount {...props} /> : <NewAccount {...props} />}
+      {someoneElse ? (
+        <>
+          <p role="alert" className="text-sm text-stone-800">
+            You are signed in as {signedInEmail}, but this invitation is for {invitation.email}.
+            {invitation.accountExists
+              ? ` Sign out, then sign in as ${invitation.email}.`
+              : ' Sign out first to create the account for it here.'}
+          </p>
+          {signOutControl}
+        </>
+      ) : invitation.accountExists ? (
+        <ExistingAccount {...props} />
+      ) : (
+        <NewAccount {...props} />
+      )}
     </div>
   );
 }
@@ -47,7 +63,6 @@ function ExistingAccount({
   signedInEmail,
   onAccepted,
   signInLink,
-  signOutControl,
 }: AcceptInvitationProps) {
   const accept = useAcceptInvitation();
   if (signedInEmail === null) {
@@ -58,17 +73,6 @@ function ExistingAccount({
           come back here.
         </p>
         {signInLink}
-      </>
-    );
-  }
-  if (!sameAddress(signedInEmail, invitation.email)) {
-    return (
-      <>
-        <p role="alert" className="text-sm text-stone-800">
-          You are signed in as {signedInEmail}, but this invitation is for {invitation.email}. Sign
-          out, then sign in as {invitation.email}.
-        </p>
-        {signOutControl}
       </>
     );
   }
@@ -87,7 +91,7 @@ function ExistingAccount({
   );
 }
 
-function NewAccount({ token, invitation, signedInEmail, onAccepted }: AcceptInvitationProps) {
+function NewAccount({ token, invitation, onAccepted }: AcceptInvitationProps) {
   const accept = useAcceptInvitation();
   const [values, setValues] = useState({ name: '', password: '' });
   const { errors, submit } = useValidatedSubmit(newAccountBody, accept);
@@ -102,12 +106,6 @@ function NewAccount({ token, invitation, signedInEmail, onAccepted }: AcceptInvi
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="Create your account">
-      {signedInEmail !== null && (
-        <p className="text-sm text-stone-700">
-          You are signed in as {signedInEmail}. Accepting creates a separate account for{' '}
-          {invitation.email} and signs you in to it.
-        </p>
-      )}
       <FormAlert message={formErrorMessage(accept.error, FIELDS)} />
       <TextField label="E-mail" type="email" name="email" value={invitation.email} readOnly />
       <TextField
