@@ -1,7 +1,7 @@
-// Browser end-to-end for people: an owner invites a new address from the members page and the
-// invitee joins through the mailed link; a forgotten password is reset through the mailed link;
-// the account page changes one's name; the owner reads the audit trail; the site administrator
-// disables an account. Mail goes to the SMTP fake.
+// Browser end-to-end for people: an owner invites a new address from the members page, resends and
+// withdraws invitations, and the invitee joins through the mailed link; a forgotten password is
+// reset through the mailed link; the account page changes one's name; the owner reads the audit
+// trail; the site administrator disables an account. Mail goes to the SMTP fake.
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStack, type Stack } from '../support/stack';
@@ -82,6 +82,20 @@ describe('invitations, password reset, account page, audit trail and user list',
     const stranger = await newPage();
     await stranger.goto(`${stack.baseUrl}${withdrawnPath}`);
     await stranger.getByText('This invitation was withdrawn').waitFor();
+    await stranger.context().close();
+  });
+
+  it('when the owner resends an invitation, then a new link is mailed and the old one stops working', async () => {
+    const before = stack.mail!.messages.length;
+    await owner.getByRole('button', { name: `Resend the invitation of ${INVITEE}` }).click();
+    await owner.getByText(`A new link was sent to ${INVITEE}.`).waitFor();
+    const oldPath = invitationPath;
+    invitationPath = await mailedLink(stack.mail!, INVITEE, '/invitations/accept', before);
+    expect(invitationPath).not.toBe(oldPath);
+
+    const stranger = await newPage();
+    await stranger.goto(`${stack.baseUrl}${oldPath}`);
+    await stranger.getByText('This invitation link does not work').waitFor();
     await stranger.context().close();
   });
 
