@@ -10,6 +10,7 @@ import { ConfirmEmailRoute } from './routes/confirm-email';
 import { ForgotPasswordRoute } from './routes/forgot-password';
 import { NotFoundRoute } from './routes/not-found';
 import { ProjectAuditRoute } from './routes/project-audit';
+import { ProjectDataRoute } from './routes/project-data';
 import { ProjectExportsRoute } from './routes/project-exports';
 import { ProjectFiguresRoute } from './routes/project-figures';
 import { ProjectLayout } from './routes/project-layout';
@@ -47,6 +48,7 @@ const router = createBrowserRouter([
               { index: true, element: <ProjectFiguresRoute /> },
               { path: 'members', element: <ProjectMembersRoute /> },
               { path: 'exports', element: <ProjectExportsRoute /> },
+              { path: 'data', element: <ProjectDataRoute /> },
               { path: 'settings', element: <ProjectSettingsRoute /> },
               { path: 'audit', element: <ProjectAuditRoute /> },
             ],

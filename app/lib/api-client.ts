@@ -12,6 +12,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields: Record<string, string> = {},
+    /** Machine-readable extras, e.g. every line-numbered problem of an uploaded file. */
+    readonly details: Record<string, unknown> = {},
   ) {
     super(message);
   }
@@ -58,13 +60,15 @@ function buildUrl(path: string, query?: Record<string, string | undefined>): str
 
 async function send(path: string, init: RequestInit_, csrfToken: string | null): Promise<Response> {
   const headers: Record<string, string> = { accept: 'application/json' };
-  if (init.body !== undefined) headers['content-type'] = 'application/json';
+  // A form (file upload) sets its own multipart content type with the boundary.
+  const form = init.body instanceof FormData ? init.body : null;
+  if (init.body !== undefined && !form) headers['content-type'] = 'application/json';
   if (csrfToken !== null) headers['x-csrf-token'] = csrfToken;
   try {
     return await fetch(buildUrl(path, init.query), {
       method: init.method,
       headers,
-      body: init.body === undefined ? undefined : JSON.stringify(init.body),
+      body: form ?? (init.body === undefined ? undefined : JSON.stringify(init.body)),
       credentials: 'same-origin',
       signal: init.signal,
     });
@@ -82,8 +86,8 @@ async function errorFrom(response: Response): Promise<ApiError> {
   const body: unknown = await response.json().catch(() => null);
   const parsed = apiErrorSchema.safeParse(body);
   if (parsed.success) {
-    const { code, message, fields } = parsed.data.error;
-    return new ApiError(response.status, code, message, fields ?? {});
+    const { code, message, fields, details } = parsed.data.error;
+    return new ApiError(response.status, code, message, fields ?? {}, details ?? {});
   }
   const reason = response.statusText ? ` (${response.statusText})` : '';
   return new ApiError(
@@ -152,6 +156,10 @@ export const api = {
   },
   patch<S extends z.ZodType>(path: string, body: unknown, schema: S): Promise<z.output<S>> {
     return withSchema(path, { method: 'PATCH', body }, schema);
+  },
+  /** POST multipart/form-data (a file and its form fields). */
+  upload<S extends z.ZodType>(path: string, form: FormData, schema: S): Promise<z.output<S>> {
+    return withSchema(path, { method: 'POST', body: form }, schema);
   },
   /** DELETE answers 204 No Content. */
   async delete(path: string): Promise<void> {

@@ -9,6 +9,8 @@ import { PageHeader } from '../components/ui/page-header';
 import { RoleBadge } from '../components/ui/role-badge';
 import { Panel } from '../components/ui/panel';
 import { ErrorPanel, Loading } from '../components/ui/status';
+import { figureBundleUrl } from '../features/bundles/api/bundle-urls';
+import { BundleDownloadLink } from '../features/bundles/components/bundle-download-link';
 import { useFigure } from '../features/figures/api/get-figure';
 import { FigureActions } from '../features/figures/components/figure-actions';
 import { FigureDetailsForm } from '../features/figures/components/figure-details-form';
@@ -116,6 +118,7 @@ function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
             <span>Approved at revision {figure.approvedRevision}</span>
           )}
           <RoleBadge role={project.role} />
+          <BundleDownloadLink href={figureBundleUrl(figure.id)} />
         </div>
       </PageHeader>
 

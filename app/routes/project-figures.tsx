@@ -8,7 +8,10 @@ import { roleAllows } from '../../shared/api/roles';
 import { Button } from '../components/ui/button';
 import { Dialog } from '../components/ui/dialog';
 import { ErrorPanel, Loading } from '../components/ui/status';
-import { getFiguresQueryOptions } from '../features/figures/api/get-figures';
+import { projectBundleUrl } from '../features/bundles/api/bundle-urls';
+import { BundleDownloadLink } from '../features/bundles/components/bundle-download-link';
+import { ImportBundleForm } from '../features/bundles/components/import-bundle-form';
+import { figuresQueryKey, getFiguresQueryOptions } from '../features/figures/api/get-figures';
 import { CreateFigureForm } from '../features/figures/components/create-figure-form';
 import { FigureTable } from '../features/figures/components/figure-table';
 import { projectsQueryKey } from '../features/projects/api/get-projects';
@@ -47,11 +50,14 @@ export function ProjectFiguresRoute() {
         <h2 id="figures-title" className="text-lg font-semibold">
           Figures
         </h2>
-        {canEdit && (
-          <Button variant="primary" onClick={() => setCreating(true)}>
-            New figure
-          </Button>
-        )}
+        <div className="flex flex-wrap gap-2">
+          <BundleDownloadLink href={projectBundleUrl(project.id)} />
+          {canEdit && (
+            <Button variant="primary" onClick={() => setCreating(true)}>
+              New figure
+            </Button>
+          )}
+        </div>
       </div>
       {figures.isPending ? (
         <Loading label="Loading figures…" />
@@ -75,6 +81,22 @@ export function ProjectFiguresRoute() {
             onDeleted={() => void queryClient.invalidateQueries({ queryKey: projectsQueryKey })}
           />
         </>
+      )}
+      {canEdit && (
+        <details className="rounded-xl border border-stone-200 bg-white p-4">
+          <summary className="cursor-pointer text-sm font-semibold">
+            Import figures from a bundle
+          </summary>
+          <div className="mt-3">
+            <ImportBundleForm
+              target={project.id}
+              onImported={() => {
+                void queryClient.invalidateQueries({ queryKey: projectsQueryKey });
+                void queryClient.invalidateQueries({ queryKey: figuresQueryKey });
+              }}
+            />
+          </div>
+        </details>
       )}
       <Dialog
         open={creating}

@@ -56,6 +56,9 @@ function ProjectFrame({ projectId }: { projectId: number }) {
         <NavLink to={`/projects/${p.id}/exports`} className={tabClasses}>
           Exports
         </NavLink>
+        <NavLink to={`/projects/${p.id}/data`} className={tabClasses}>
+          Data
+        </NavLink>
         <NavLink to={`/projects/${p.id}/members`} className={tabClasses}>
           Members
         </NavLink>

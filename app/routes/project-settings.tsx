@@ -3,6 +3,8 @@
 import { roleAllows } from '../../shared/api/roles';
 import type { Project } from '../../shared/api/schemas';
 import { Panel } from '../components/ui/panel';
+import { projectBundleUrl } from '../features/bundles/api/bundle-urls';
+import { BundleDownloadLink } from '../features/bundles/components/bundle-download-link';
 import { ErrorPanel, Loading } from '../components/ui/status';
 import { useHouseStyle } from '../features/house-style/api/get-house-style';
 import { HouseStyleForm } from '../features/house-style/components/house-style-form';
@@ -55,6 +57,13 @@ export function ProjectSettingsRoute() {
         </div>
       )}
       <HouseStylePanel project={project} canManage={canManage} />
+      <Panel id="bundle-title" title="Bundle">
+        <p className="mb-3 max-w-3xl text-sm text-stone-700">
+          One JSON file with every figure’s spec, caption and alt text, the house style and the
+          uploaded data (no people or dates), to import as a new project or into another one.
+        </p>
+        <BundleDownloadLink href={projectBundleUrl(project.id)} />
+      </Panel>
       {!canManage && (
         <p className="text-sm text-stone-600">
           Only the project’s owners can rename or archive it.

@@ -1,12 +1,14 @@
 // /: the projects the signed-in user belongs to, active or archived, and a way to start one.
 import { useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import { useNavigate } from 'react-router';
 import { Button } from '../components/ui/button';
 import { Dialog } from '../components/ui/dialog';
 import { PageHeader } from '../components/ui/page-header';
 import { SegmentedChoice } from '../components/ui/segmented-choice';
 import { ErrorPanel, Loading } from '../components/ui/status';
-import { useProjects } from '../features/projects/api/get-projects';
+import { ImportBundleForm } from '../features/bundles/components/import-bundle-form';
+import { projectsQueryKey, useProjects } from '../features/projects/api/get-projects';
 import { CreateProjectForm } from '../features/projects/components/create-project-form';
 import { ProjectList } from '../features/projects/components/project-list';
 import { useDocumentTitle } from '../hooks/use-document-title';
@@ -21,6 +23,8 @@ export function ProjectsRoute() {
   useDocumentTitle('Projects');
   const [shown, setShown] = useState<Shown>('active');
   const [creating, setCreating] = useState(false);
+  const [importing, setImporting] = useState(false);
+  const queryClient = useQueryClient();
   const projects = useProjects({ archived: shown === 'archived' });
   const navigate = useNavigate();
 
@@ -29,9 +33,12 @@ export function ProjectsRoute() {
       <PageHeader
         title="Projects"
         actions={
-          <Button variant="primary" onClick={() => setCreating(true)}>
-            New project
-          </Button>
+          <>
+            <Button onClick={() => setImporting(true)}>Import bundle</Button>
+            <Button variant="primary" onClick={() => setCreating(true)}>
+              New project
+            </Button>
+          </>
         }
       >
         <p className="max-w-2xl text-stone-700">
@@ -62,6 +69,18 @@ export function ProjectsRoute() {
           }
         />
       )}
+
+      <Dialog
+        open={importing}
+        onClose={() => setImporting(false)}
+        title="New project from a bundle"
+        description="The bundle’s figures, house style and data become a new project that you own."
+      >
+        <ImportBundleForm
+          target="new project"
+          onImported={() => void queryClient.invalidateQueries({ queryKey: projectsQueryKey })}
+        />
+      </Dialog>
 
       <Dialog
         open={creating}
