@@ -23,6 +23,7 @@ import { clipPolyline } from './clip-polyline';
 import { dataSeriesNodes, dataSeriesOf, seriesRange, type DataSeries, type FigureDatasets } from './radial-datasets';
 import { FigureSpecError } from './figure-error';
 import { sceneForSpec } from './scene-for-spec';
+import { solvedRadialSet, type SolvedRadialSet } from './solved-radial-set';
 import { figureStyle, type FigureStyle } from './figure-style';
 import { describeSystem, systemMassRatio } from './figure-system';
 import { shellRuns } from './label-runs';
@@ -75,6 +76,8 @@ interface Context {
   facts: SceneFact[];
   colourOf: (c: Curve) => Stroke;
   dataStroke: (s: DataSeries) => Stroke;
+  /** States of curves with source "solved" (kind.potential solved numerically). */
+  solved: SolvedRadialSet;
 }
 
 const italic = (t: string): TextRun => ({ text: t, shift: 'base', italic: true });
@@ -106,6 +109,11 @@ function quantityUnit(q: Quantity, ctx: Context): TextRun[] {
 /** Printed value of a radial quantity at r (bohr). */
 function curveValue(c: Curve, r: number, ctx: Context): number {
   const p = ctx.unit.perBohr;
+  const solved = ctx.solved.curveOf(c);
+  if (solved) {
+    if (c.quantity === 'R') return solved.R(r) / Math.pow(p, 1.5);
+    return c.quantity === 'r2R2' ? solved.r2R2(r) / p : solved.cumulative(r);
+  }
   if (c.quantity === 'R') return radialFunction(c.n, c.l, r, ctx.Z, ctx.mu) / Math.pow(p, 1.5);
   if (c.quantity === 'r2R2') {
     const R = radialFunction(c.n, c.l, r, ctx.Z, ctx.mu);
@@ -129,7 +137,13 @@ function autoRange(curves: readonly Curve[], ctx: Context): number {
       }).levels;
       r = Math.max(r, AUTO_RANGE_TURNING_POINTS * levels[levels.length - 1].outerTurningPoint);
     } else {
-      r = Math.max(r, radiusEnclosingProbability(c.n, c.l, AUTO_RANGE_PROBABILITY, ctx.Z, ctx.mu));
+      const solved = ctx.solved.curveOf(c);
+      r = Math.max(
+        r,
+        solved
+          ? solved.radiusEnclosing(AUTO_RANGE_PROBABILITY)
+          : radiusEnclosingProbability(c.n, c.l, AUTO_RANGE_PROBABILITY, ctx.Z, ctx.mu),
+      );
     }
   }
   return r;
@@ -165,7 +179,13 @@ function checkCurves(kind: RadialKind): void {
 }
 
 function curveKey(c: Curve): string {
-  return `${c.n},${c.l}`;
+  return `${c.n},${c.l}${c.source === 'solved' ? ',solved' : ''}`;
+}
+
+/** "2s", or "2s (solved)" / "2s (hydrogen)" where the figure draws solved states. */
+function curveRuns(c: Curve, ctx: Context): TextRun[] {
+  const suffix = ctx.solved.suffix(c);
+  return suffix ? [...shellRuns(c.n, c.l), plain(suffix)] : shellRuns(c.n, c.l);
 }
 
 /** The label and, when it sits away from its point, a thin leader line to it. */
@@ -256,7 +276,7 @@ function functionPanel(
     nodes.push(...dataSeriesNodes(s, X, (v) => Y(printedData(s, v, ctx)), frame, ctx.dataStroke(s), drawn));
   placer.avoidCurve(drawn);
   const entries: LegendEntry[] = [
-    ...panel.curves.map((c) => ({ runs: shellRuns(c.n, c.l), stroke: ctx.colourOf(c) })),
+    ...panel.curves.map((c) => ({ runs: curveRuns(c, ctx), stroke: ctx.colourOf(c) })),
     ...dataLegend(panel, ctx),
   ];
   const key = legendAvoiding(entries, frame, style.smallSizePt, style.ink, drawn);
@@ -266,14 +286,15 @@ function functionPanel(
   const markerSize = style.smallSizePt * 0.92;
   const cap = capHeightMm(markerSize);
   for (const c of panel.curves) {
-    const name = runsText(shellRuns(c.n, c.l));
+    const name = runsText(curveRuns(c, ctx));
     const stroke = ctx.colourOf(c);
+    const solved = ctx.solved.curveOf(c);
     if (
       ctx.spec.kind.type === 'radial' &&
       ctx.spec.kind.showNodes &&
       panel.quantity !== 'cumulative'
     ) {
-      for (const node of radialNodes(c.n, c.l, ctx.Z, ctx.mu)) {
+      for (const node of solved?.nodes ?? radialNodes(c.n, c.l, ctx.Z, ctx.mu)) {
         if (node > rMaxBohr) continue;
         const x = X(node);
         const y = Y(0);
@@ -302,7 +323,7 @@ function functionPanel(
       ctx.spec.kind.showMostProbable &&
       panel.quantity === 'r2R2'
     ) {
-      const rp = mostProbableRadius(c.n, c.l, ctx.Z, ctx.mu);
+      const rp = solved?.mostProbableRadius ?? mostProbableRadius(c.n, c.l, ctx.Z, ctx.mu);
       if (rp > rMaxBohr) continue;
       const peak = curveValue(c, rp, ctx);
       const x = X(rp);
@@ -470,6 +491,7 @@ export function buildRadialScene(spec: ResolvedFigureSpec, datasets?: FigureData
     throw new FigureSpecError('kind.type', `expected "radial", got "${spec.kind.type}"`);
   const kind = spec.kind;
   checkCurves(kind);
+  const solved = solvedRadialSet(spec);
   const style = figureStyle(spec);
   const unit = lengthUnit(spec.system.lengthUnit);
   const distinct = [...new Set(kind.curves.map(curveKey))];
@@ -502,6 +524,7 @@ export function buildRadialScene(spec: ResolvedFigureSpec, datasets?: FigureData
       widthPt: style.lineWidthPt * 1.1,
       join: 'round',
     }),
+    solved,
   };
   const data = dataSeriesOf(spec, datasets);
 
@@ -566,10 +589,7 @@ export function buildRadialScene(spec: ResolvedFigureSpec, datasets?: FigureData
     nodes.push({ type: 'group', children: group, role: `panel-${panel.quantity}` });
   });
 
-  const names = distinct.map((k) => {
-    const [n, l] = k.split(',').map(Number);
-    return runsText(shellRuns(n, l));
-  });
+  const names = distinct.map((k) => runsText(curveRuns(kind.curves.find((c) => curveKey(c) === k) as Curve, ctx)));
   const quantityWords: Record<Quantity, string> = {
     R: 'radial function R(r)',
     r2R2: 'radial distribution r²R²',
@@ -578,9 +598,9 @@ export function buildRadialScene(spec: ResolvedFigureSpec, datasets?: FigureData
   };
   const title = `Radial plot of ${names.join(', ')} (${describeSystem(spec)})`;
   const facts = ctx.facts.map((f) => `${f.name}: ${f.printed}`).join('; ');
-  const drawnNames = (p: Panel) => [...p.curves.map((c) => runsText(shellRuns(c.n, c.l))), ...p.data.map((s) => `data "${s.label}"`)];
+  const drawnNames = (p: Panel) => [...p.curves.map((c) => runsText(curveRuns(c, ctx))), ...p.data.map((s) => `data "${s.label}"`)];
   const altText = `${panels.map((p) => `${quantityWords[p.quantity]} of ${drawnNames(p).join(', ')}`).join('; ')}, against r from 0 to ${formatSignificant(xEndBohr * unit.perBohr, 3)} ${unit.symbol}.${facts ? ` ${facts}.` : ''}`;
-  const notes: string[] = [...data.notes];
+  const notes: string[] = [...data.notes, ...solved.notes];
   if (spec.system.nucleus !== 'infinite')
     notes.push(
       'Lengths are printed in units of the Bohr radius a0 (not the reduced-mass radius); the reduced mass enters the curves themselves.',
