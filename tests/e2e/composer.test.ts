@@ -71,7 +71,7 @@ describe('the figure composer', () => {
     const cells = await row.getByRole('cell').allTextContents();
     expect(cells[0]).toMatch(/^-0\.8504 eV/);
     expect(cells[1]).toBe('0 / 3');
-    await page.getByText('Unsaved changes').waitFor();
+    await page.getByText('Unsaved changes', { exact: true }).waitFor();
     await saveScreenshot(page, 'composer-4f');
   });
 
@@ -188,7 +188,7 @@ describe('the figure composer', () => {
     await page.getByRole('tab', { name: 'Orbital' }).click();
     await page.getByText('Superposition', { exact: true }).click();
     await page.getByRole('list', { name: 'Terms of the superposition' }).waitFor();
-    await page.getByLabel('Term 2 weight, imaginary part').fill('1');
+    await page.getByLabel('Term 2 Weight, imaginary').fill('1');
     await readout()
       .getByText(/Mean energy/)
       .waitFor();
@@ -196,6 +196,40 @@ describe('the figure composer', () => {
     await saveScreenshot(page, 'composer-superposition');
     await page.getByText('One orbital', { exact: true }).click();
     await ready3d(/3D figure ready: 4f_z³/);
+  });
+
+  it('when someone saved meanwhile, then saving names their revision and "save mine on top" keeps both', async () => {
+    const ada = await (
+      await browser.newContext({ viewport: { width: 1360, height: 1000 } })
+    ).newPage();
+    await signIn(ada, stack.baseUrl, 'ada.okafor@harrowgate.example');
+    await ada.getByRole('link', { name: PROJECT }).click();
+    await ada.getByRole('link', { name: /^The 3d_z² orbital$|^The 3dz² orbital$/ }).click();
+    await ada.getByLabel('Caption').fill('The 4f_z³ orbital with its three nodal surfaces.');
+    await ada.getByRole('button', { name: 'Save as new revision' }).click();
+    await ada
+      .getByRole('status')
+      .filter({ hasText: /^Saved as revision 3\.$/ })
+      .waitFor();
+
+    await page.getByRole('tab', { name: 'Figure' }).click();
+    await page.getByLabel('Probability enclosed').fill('80');
+    await page.getByText('Unsaved changes', { exact: true }).waitFor();
+    await page.getByRole('button', { name: 'Save figure as revision 3' }).click();
+    const notice = page
+      .getByRole('alert')
+      .filter({ hasText: 'saved revision 3 while you were editing' });
+    await notice.waitFor();
+    expect(await notice.textContent()).toContain(
+      'Ada Okafor saved revision 3 while you were editing.',
+    );
+    await saveScreenshot(page, 'composer-newer-revision');
+    await notice.getByRole('button', { name: 'Save mine on top of revision 3' }).click();
+    await page.getByRole('status').filter({ hasText: 'Figure saved as revision 4.' }).waitFor();
+    expect(await page.getByLabel('Caption').inputValue()).toBe(
+      'The 4f_z³ orbital with its three nodal surfaces.',
+    );
+    expect(await page.getByLabel('Probability enclosed').inputValue()).toBe('80');
   });
 
   it('when a viewer opens the figure, then the composer is read-only but downloads remain', async () => {

@@ -9,6 +9,8 @@ export interface Choice<T extends string | number> {
 
 interface ChoiceFieldProps<T extends string | number> {
   label: string;
+  /** Read out before the label but not shown (e.g. "Term 2"), where the group already says it. */
+  srPrefix?: string;
   value: T;
   choices: readonly Choice<T>[];
   onChange: (value: T) => void;
@@ -19,6 +21,7 @@ interface ChoiceFieldProps<T extends string | number> {
 
 export function ChoiceField<T extends string | number>({
   label,
+  srPrefix,
   value,
   choices,
   onChange,
@@ -30,6 +33,7 @@ export function ChoiceField<T extends string | number>({
   return (
     <div className={cn('space-y-1', className)}>
       <label htmlFor={id} className="block text-sm font-semibold text-stone-800">
+        {srPrefix ? <span className="sr-only">{srPrefix} </span> : null}
         {label}
       </label>
       <select

@@ -69,7 +69,7 @@ export function Composer({
   duplicate,
   render3d,
 }: ComposerProps) {
-  const { history, dirty, edit, undo, redo, load } = useSpecHistory(
+  const { history, dirty, edit, undo, redo, load, allowLeave } = useSpecHistory(
     figure.spec,
     figure.revision,
     canEdit,
@@ -95,6 +95,11 @@ export function Composer({
   const deferred = useDeferredValue(spec);
   const resolved = useMemo(() => resolveFigureSpec(deferred, houseStyle), [deferred, houseStyle]);
   const threeD = isThreeDimensional(resolved.kind);
+  // Once shown, the 3D view stays mounted (hidden while a 2D figure is previewed): taking the
+  // WebGL canvas and its labels down and up again on every switch of kind is slow and fragile.
+  const [kept3d, setKept3d] = useState<ResolvedFigureSpec | null>(threeD ? resolved : null);
+  if (threeD && kept3d !== resolved) setKept3d(resolved);
+  const spec3d = threeD ? resolved : kept3d;
   const flat = useFigureScene(threeD ? null : resolved);
   const facts = useMemo(() => stateFacts(deferred), [deferred]);
   const overrides = useMemo(() => houseStyleOverrides(spec, houseStyle), [spec, houseStyle]);
@@ -127,6 +132,7 @@ export function Composer({
   async function doDuplicate() {
     setBusy('duplicate');
     try {
+      allowLeave();
       await duplicate(spec);
     } catch (error) {
       setNotice({ kind: 'error', message: error instanceof Error ? error.message : String(error) });
@@ -296,9 +302,10 @@ export function Composer({
               </p>
             )}
           </div>
-          {threeD ? (
-            render3d(resolved, { onViewChange, viewOnlyChange })
-          ) : (
+          {spec3d ? (
+            <div hidden={!threeD}>{render3d(spec3d, { onViewChange, viewOnlyChange })}</div>
+          ) : null}
+          {threeD ? null : (
             <div className="relative rounded border border-stone-200 bg-white p-2">
               {flat.scene ? (
                 <FlatFigure svg={flat.scene.svg} />

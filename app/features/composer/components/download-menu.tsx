@@ -171,12 +171,12 @@ export function DownloadMenu({
       {outcome ? (
         <div
           role={outcome.kind === 'error' ? 'alert' : 'status'}
-          className={`order-last basis-full rounded-md border p-2.5 text-xs ${outcome.kind === 'error' ? 'border-red-300 bg-red-50 text-red-800' : 'border-stone-300 bg-white text-stone-800'}`}
+          className={`order-last flex basis-full items-start justify-between gap-3 rounded-md border px-3 py-2 text-xs ${outcome.kind === 'error' ? 'border-red-300 bg-red-50 text-red-800' : 'border-stone-300 bg-white text-stone-800'}`}
         >
           {outcome.kind === 'error' ? (
             <p>The file could not be made: {outcome.message}</p>
           ) : (
-            <>
+            <div>
               <p>Downloaded {outcome.filename}.</p>
               {outcome.cmyk ? <p className="mt-1 text-amber-900">{CMYK_NOTE}</p> : null}
               {outcome.notes.length > 0 ? (
@@ -186,11 +186,11 @@ export function DownloadMenu({
                   ))}
                 </ul>
               ) : null}
-            </>
+            </div>
           )}
           <button
             type="button"
-            className="mt-1 text-accent-700 underline"
+            className="shrink-0 text-accent-700 underline"
             onClick={() => setOutcome(null)}
           >
             Dismiss

@@ -6,6 +6,8 @@ import { cn } from '../../../utils/cn';
 
 export interface NumberFieldProps {
   label: string;
+  /** Read out before the label but not shown (e.g. "Term 2"), where the group already says it. */
+  srPrefix?: string;
   value: number;
   onChange: (value: number) => void;
   min: number;
@@ -27,6 +29,7 @@ export function formatNumber(value: number, decimals?: number): string {
 
 export function NumberField({
   label,
+  srPrefix,
   value,
   onChange,
   min,
@@ -58,6 +61,7 @@ export function NumberField({
   return (
     <div className={cn('space-y-1', className)}>
       <label htmlFor={id} className="block text-sm font-semibold text-stone-800">
+        {srPrefix ? <span className="sr-only">{srPrefix} </span> : null}
         {label}
       </label>
       <div className="flex items-center gap-2">

@@ -54,20 +54,22 @@ function TermControls({
   onEdit,
   readOnly,
   prefix,
-}: Props & { index: number; prefix: string }) {
+}: Props & { index: number; prefix: string | undefined }) {
   const t: SpecTerm = spec.state.terms[index];
   const field = (name: string) => `state.terms.${index}.${name}`;
   return (
     <div className="grid grid-cols-2 gap-3">
       <ChoiceField
-        label={`${prefix}n (shell)`}
+        srPrefix={prefix}
+        label="n (shell)"
         value={t.n}
         disabled={readOnly}
         choices={range(1, MAX_N).map((n) => ({ value: n, label: String(n) }))}
         onChange={(n) => onEdit(setQuantumNumber(spec, index, 'n', n), field('n'))}
       />
       <ChoiceField
-        label={`${prefix}l (subshell)`}
+        srPrefix={prefix}
+        label="l (subshell)"
         value={t.l}
         disabled={readOnly}
         choices={range(0, t.n - 1).map((l) => ({
@@ -77,7 +79,8 @@ function TermControls({
         onChange={(l) => onEdit(setQuantumNumber(spec, index, 'l', l), field('l'))}
       />
       <ChoiceField
-        label={`${prefix}Orbital`}
+        srPrefix={prefix}
+        label="Orbital"
         className="col-span-2"
         value={t.m}
         disabled={readOnly}
@@ -91,7 +94,8 @@ function TermControls({
         onChange={(m) => onEdit(setQuantumNumber(spec, index, 'm', m), field('m'))}
       />
       <ChoiceField
-        label={`${prefix}Basis`}
+        srPrefix={prefix}
+        label="Basis"
         className="col-span-2"
         value={t.basis}
         disabled={readOnly}
@@ -190,11 +194,12 @@ export function OrbitalControls({ spec, onEdit, readOnly }: Props) {
                     index={i}
                     onEdit={onEdit}
                     readOnly={readOnly}
-                    prefix={`Term ${i + 1} `}
+                    prefix={`Term ${i + 1}`}
                   />
                   <div className="grid grid-cols-2 gap-3">
                     <NumberField
-                      label={`Term ${i + 1} weight, real part`}
+                      srPrefix={`Term ${i + 1}`}
+                      label="Weight, real part"
                       value={t.weight.re}
                       min={-100}
                       max={100}
@@ -205,7 +210,8 @@ export function OrbitalControls({ spec, onEdit, readOnly }: Props) {
                       }
                     />
                     <NumberField
-                      label={`Term ${i + 1} weight, imaginary part`}
+                      srPrefix={`Term ${i + 1}`}
+                      label="Weight, imaginary"
                       value={t.weight.im}
                       min={-100}
                       max={100}
@@ -240,7 +246,13 @@ export function OrbitalControls({ spec, onEdit, readOnly }: Props) {
             />
           </>
         ) : (
-          <TermControls spec={spec} index={0} onEdit={onEdit} readOnly={readOnly} prefix="" />
+          <TermControls
+            spec={spec}
+            index={0}
+            onEdit={onEdit}
+            readOnly={readOnly}
+            prefix={undefined}
+          />
         )}
       </ControlGroup>
     </div>

@@ -1,7 +1,8 @@
 // The composer's spec with undo and redo: Ctrl/⌘+Z undoes, Shift+Ctrl/⌘+Z (or Ctrl+Y) redoes,
 // except while typing in a text box, where the browser's own text undo applies. Leaving the page
-// with unsaved changes asks first.
-import { useCallback, useEffect, useReducer } from 'react';
+// with unsaved changes (closing the tab, or following a link) asks first.
+import { useCallback, useEffect, useReducer, useRef } from 'react';
+import { useBlocker } from 'react-router';
 import type { FigureSpec } from '../../../../shared/spec/figure-spec';
 import {
   hasUnsavedChanges,
@@ -48,6 +49,22 @@ export function useSpecHistory(spec: FigureSpec, revision: number, enabled: bool
     return () => window.removeEventListener('keydown', onKey);
   }, [enabled, undo, redo]);
 
+  // Moving to another page inside the app asks too, unless the changes went with the user (a copy).
+  const leaving = useRef(false);
+  const allowLeave = useCallback(() => {
+    leaving.current = true;
+  }, []);
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) =>
+      dirty && !leaving.current && currentLocation.pathname !== nextLocation.pathname,
+  );
+  useEffect(() => {
+    if (blocker.state !== 'blocked') return;
+    if (window.confirm('This figure has unsaved changes. Leave the page and drop them?'))
+      blocker.proceed();
+    else blocker.reset();
+  }, [blocker]);
+
   useEffect(() => {
     if (!dirty) return;
     const warn = (event: BeforeUnloadEvent) => event.preventDefault();
@@ -55,5 +72,5 @@ export function useSpecHistory(spec: FigureSpec, revision: number, enabled: bool
     return () => window.removeEventListener('beforeunload', warn);
   }, [dirty]);
 
-  return { history, dirty, edit, undo, redo, load };
+  return { history, dirty, edit, undo, redo, load, allowLeave };
 }
