@@ -359,7 +359,9 @@ export function Composer({
             busy={busy === 'save'}
             onClick={() => void doSave(history.savedRevision)}
           >
-            {busy === 'save' ? 'Saving…' : `Save figure as revision ${history.savedRevision + 1}`}
+            {busy === 'save'
+              ? 'Saving…'
+              : `Save figure as revision ${Math.max(history.savedRevision, figure.revision) + 1}`}
           </Button>
         </div>
       ) : null}
