@@ -21,6 +21,8 @@ const QUANTITY_WORDS = {
   potential: 'V (potential)',
 };
 
+const stemOf = (f: File | null) => (f ? f.name.replace(/\.(csv|txt)$/i, '') : '');
+
 export function DatasetUploadForm({ projectId }: { projectId: number }) {
   const upload = useUploadDataset(projectId);
   const [file, setFile] = useState<File | null>(null);
@@ -44,7 +46,8 @@ export function DatasetUploadForm({ projectId }: { projectId: number }) {
     setSaved(null);
     upload.reset();
     setText(f && f.size <= MAX_DATASET_FILE_BYTES ? await f.text() : null);
-    if (f && !name) setName(f.name.replace(/\.(csv|txt)$/i, ''));
+    // The name follows the file until the person types one of their own.
+    if (f && (!name || name === stemOf(file))) setName(stemOf(f));
   }
 
   function submit(e: FormEvent) {
