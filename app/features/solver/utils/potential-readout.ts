@@ -1,0 +1,65 @@
+// The read-out under the potential picker: the lowest levels of each l with their estimated error,
+// node count and ⟨r⟩ from shared/solver, and for each l the solver refuses (fewer bound levels than
+// asked, none at all) its own message, so one unbound l does not hide the others.
+import { OrbitalInputError } from '../../../../shared/physics/orbital-input-error';
+import { buildPotential } from '../../../../shared/solver/potentials/build-potential';
+import { solveRadialSeries } from '../../../../shared/solver/solve-radial-series';
+import type { PotentialSpec } from '../../../../shared/spec/figure-spec';
+
+export interface ReadoutRow {
+  name: string;
+  energy: number;
+  error: number;
+  nodes: number;
+  rMean: number;
+}
+
+export interface Refusal {
+  /** What the solver blames: "l = 2" (too few levels bound), "potential.lambda". */
+  field: string;
+  message: string;
+}
+
+export interface Readout {
+  rows: ReadoutRow[];
+  refusals: Refusal[];
+}
+
+const LETTERS = 'spdfghiklmnoqrtuvwxyz';
+
+export function potentialReadout(
+  spec: PotentialSpec,
+  ls: number[],
+  levels: number,
+  muRatio = 1,
+): Readout {
+  const rows: ReadoutRow[] = [];
+  const refusals: Refusal[] = [];
+  const refuse = (err: unknown, field?: string): void => {
+    if (!(err instanceof OrbitalInputError)) throw err;
+    refusals.push({ field: field ?? err.field, message: err.reason });
+  };
+  let potential;
+  try {
+    potential = buildPotential(spec);
+  } catch (err) {
+    refuse(err);
+    return { rows, refusals };
+  }
+  ls.forEach((l) => {
+    try {
+      const [solution] = solveRadialSeries({ potential, l: [l], levels, muRatio });
+      for (const lv of solution.levels)
+        rows.push({
+          name: `${lv.n}${LETTERS[lv.l] ?? `(l=${lv.l})`}`,
+          energy: lv.energy,
+          error: lv.error,
+          nodes: lv.nodes,
+          rMean: lv.rMean,
+        });
+    } catch (err) {
+      refuse(err, `l = ${l}`);
+    }
+  });
+  return { rows: rows.sort((a, b) => a.energy - b.energy), refusals };
+}
