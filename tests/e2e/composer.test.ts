@@ -149,6 +149,14 @@ describe('the figure composer', () => {
       .first()
       .waitFor();
     await saveScreenshot(page, 'composer-radial');
+    const print = page.getByRole('region', { name: 'What will print' });
+    await print
+      .getByText(
+        /^Your unsaved changes, drawn in the browser at the printed size: 84 × 84 mm; at 300 dpi the PNG will be 992 × 992 px\./,
+      )
+      .waitFor();
+    await print.scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'composer-radial-print');
     await page.keyboard.press('Control+Z');
     await ready3d(/3D figure ready: 4f_z³/);
     expect(problems).toEqual([]);

@@ -101,7 +101,14 @@ export function Composer({
   if (threeD && kept3d !== resolved) setKept3d(resolved);
   const spec3d = threeD ? resolved : kept3d;
   const flat = useFigureScene(threeD ? null : resolved);
-  const facts = useMemo(() => stateFacts(deferred), [deferred]);
+  // The controls only make valid states, but a stored spec could still hold one the physics refuses.
+  const facts = useMemo(() => {
+    try {
+      return stateFacts(deferred);
+    } catch {
+      return null;
+    }
+  }, [deferred]);
   const overrides = useMemo(() => houseStyleOverrides(spec, houseStyle), [spec, houseStyle]);
   const savedResolved = useMemo(
     () => resolveFigureSpec(history.saved, houseStyle),
@@ -329,7 +336,7 @@ export function Composer({
             facts={facts}
             sceneFacts={threeD ? [] : (flat.scene?.facts ?? [])}
             notes={threeD ? [] : (flat.scene?.notes ?? [])}
-            showsState={resolved.kind.type !== 'levels'}
+            showsState={facts !== null && resolved.kind.type !== 'levels'}
           />
         </section>
       </div>

@@ -15,19 +15,19 @@ export function StateReadout({
   notes,
   showsState,
 }: {
-  facts: StateFacts;
+  facts: StateFacts | null;
   sceneFacts: readonly SceneFact[];
   notes: readonly string[];
   /** False for level diagrams, which do not draw the state. */
   showsState: boolean;
 }) {
-  const many = facts.terms.length > 1;
+  const many = (facts?.terms.length ?? 0) > 1;
   return (
     <section aria-labelledby="composer-readout-title" className="space-y-3 text-sm">
       <h3 id="composer-readout-title" className="text-sm font-semibold text-stone-800">
         Read-out
       </h3>
-      {showsState ? (
+      {showsState && facts ? (
         <table className="w-full text-left text-xs tabular-nums">
           <caption className="sr-only">Computed values for each orbital of the state</caption>
           <thead className="text-stone-600">
@@ -79,7 +79,7 @@ export function StateReadout({
           </tbody>
         </table>
       ) : null}
-      {showsState && many ? (
+      {showsState && facts && many ? (
         <p className="text-xs text-stone-700">
           Mean energy Σ|c|²E = {fmt(facts.meanEnergyEv)} eV.
           {facts.mixesEnergies
