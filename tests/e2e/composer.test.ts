@@ -192,6 +192,38 @@ describe('the figure composer', () => {
     await ready3d(/3D figure ready: 4f_z³/);
   });
 
+  it.each([
+    ['Balmer series levels (Hα to Hδ)', /Figure ready: Energy levels/, 'composer-levels'],
+    ['Angular shape of d_z² (curve in the xz-plane)', /Figure ready: /, 'composer-angular-curve'],
+  ])(
+    'when the preset "%s" is applied, then its 2D figure is drawn; undo returns to 4f',
+    async (name, ready, shot) => {
+      await page.getByLabel('Start from a preset').selectOption({ label: name });
+      await page.getByRole('button', { name: 'Apply', exact: true }).click();
+      await page
+        .locator('[data-figure-ready="true"]')
+        .filter({ hasText: ready })
+        .waitFor({ timeout: 30_000 });
+      await saveScreenshot(page, shot);
+      await page.getByRole('button', { name: 'Undo' }).click();
+      await ready3d(/3D figure ready: 4f_z³/);
+    },
+  );
+
+  it('when the control tabs are used from the keyboard, then arrow keys move between them with a visible focus', async () => {
+    await page.getByRole('tab', { name: 'Orbital' }).click();
+    await page.keyboard.press('ArrowRight');
+    const figureTab = page.getByRole('tab', { name: 'Figure' });
+    expect(await figureTab.getAttribute('aria-selected')).toBe('true');
+    expect(await figureTab.evaluate((el) => el === document.activeElement)).toBe(true);
+    await page.keyboard.press('Tab');
+    await page.keyboard.press('Tab');
+    expect(
+      await page.getByLabel('Kind of figure').evaluate((el) => el === document.activeElement),
+    ).toBe(true);
+    await page.getByRole('tab', { name: 'Orbital' }).click();
+  });
+
   it('when the state becomes a superposition, then each term has its weights and the read-out gives shares', async () => {
     await page.getByRole('tab', { name: 'Orbital' }).click();
     await page.getByText('Superposition', { exact: true }).click();
