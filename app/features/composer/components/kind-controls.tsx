@@ -3,7 +3,16 @@
 import { Button } from '../../../components/ui/button';
 import { CheckboxField } from '../../../components/ui/checkbox-field';
 import { angularMomentumLetter } from '../../../../shared/physics/orbital-labels';
-import { figureKindNames, MAX_N, type FigureSpec } from '../../../../shared/spec/figure-spec';
+import { systemMassRatio } from '../../../../shared/figures/figure-system';
+import {
+  figureKindNames,
+  MAX_N,
+  MAX_POTENTIAL_L,
+  MAX_POTENTIAL_LS,
+  MAX_SOLVED_LEVELS,
+  type FigureSpec,
+} from '../../../../shared/spec/figure-spec';
+import { PotentialControls } from '../../solver/components/potential-controls';
 import {
   addRadialCurve,
   addTransition,
@@ -469,6 +478,53 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             show={!readOnly && k.transitions.length < MAX_TRANSITIONS}
             label="Add a transition"
             onClick={() => edit(addTransition(spec), 'transitions')}
+          />
+        </>
+      );
+    case 'potential':
+      return (
+        <>
+          <PotentialControls
+            value={k.potential}
+            ls={k.l}
+            levels={k.levels}
+            muRatio={systemMassRatio(spec)}
+            disabled={readOnly}
+            onChange={(potential) => edit(patchKind(spec, 'potential', { potential }), 'potential')}
+          />
+          <ListField
+            label="Angular momenta l"
+            values={k.l}
+            show={String}
+            parse={(l) =>
+              Number.isInteger(l) && l >= 0 && l <= MAX_POTENTIAL_L
+                ? l
+                : `each l must be a whole number from 0 to ${MAX_POTENTIAL_L}`
+            }
+            maxItems={MAX_POTENTIAL_LS}
+            disabled={readOnly}
+            hint="Comma-separated, e.g. 0, 1, 2."
+            onChange={(l) => edit(patchKind(spec, 'potential', { l: [...new Set(l)] }), 'l')}
+          />
+          <NumberField
+            label="Levels per l"
+            value={k.levels}
+            min={1}
+            max={MAX_SOLVED_LEVELS}
+            integer
+            disabled={readOnly}
+            onChange={(levels) => edit(patchKind(spec, 'potential', { levels }), 'levels')}
+          />
+          <CheckboxField
+            label="Hydrogen's levels, dashed"
+            checked={k.compareHydrogen}
+            disabled={readOnly}
+            onChange={(e) =>
+              edit(
+                patchKind(spec, 'potential', { compareHydrogen: e.target.checked }),
+                'compareHydrogen',
+              )
+            }
           />
         </>
       );
