@@ -208,13 +208,18 @@ export async function importBundle(
     const existing: CurrentFigureRow[] =
       into === 'new project' ? [] : await currentFigures(trx, projectId);
     const used = new Set(existing.map((r) => r.number).filter(Boolean));
-    const datasetMap = await insertDatasetCopies(trx, projectId, user.id, bundle.datasets ?? []);
+    const { map: datasetMap, inserted } = await insertDatasetCopies(
+      trx,
+      projectId,
+      user.id,
+      bundle.datasets ?? [],
+    );
     const report: ImportReport = {
       projectId,
       imported: [],
       renamed: [],
       skipped: [],
-      datasets: datasetMap.size,
+      datasets: inserted,
     };
     for (const f of figures) {
       const spec = withDatasetIds(f.spec, datasetMap);

@@ -35,7 +35,7 @@ export async function copyFigure(
             targetProjectId,
             user.id,
             await listDatasetsWithData(trx, source.projectId, ids),
-          );
+          ).then((r) => r.map);
     const copy = await createFigure(trx, user, targetProjectId, {
       number: freeFigureNumber(source.number, new Set(numbers.filter(Boolean))),
       title: source.title,

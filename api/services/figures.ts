@@ -6,6 +6,7 @@ import type { FigureSpec } from '../../shared/spec/figure-spec';
 import { conflict, notFound } from '../lib/app-error';
 import { specHash } from '../lib/spec-hash';
 import { findFigure, lockFigure } from '../repositories/figures';
+import { checkDatasetRefs } from './figure-datasets';
 
 type CreateInput = z.output<typeof createFigureBody>;
 type UpdateInput = z.output<typeof updateFigureBody>;
@@ -32,6 +33,7 @@ async function insertRevision(
 }
 
 export async function createFigure(db: Knex, user: User, projectId: number, input: CreateInput): Promise<Figure> {
+  await checkDatasetRefs(db, projectId, input.spec);
   const id = await db.transaction(async (trx) => {
     const { max } = (await trx('figures').where({ project_id: projectId }).max('position as max').first()) ?? {};
     const [row] = await trx('figures')
@@ -57,6 +59,7 @@ export async function updateFigure(db: Knex, user: User, figureId: number, input
   await db.transaction(async (trx) => {
     const row = await lockFigure(trx, figureId);
     if (!row) throw notFound('figure');
+    if (input.spec) await checkDatasetRefs(trx, Number(row.project_id), input.spec);
     if (input.baseRevision !== row.current_revision) {
       throw conflict(
         'stale_revision',

@@ -203,19 +203,72 @@ describe('radial figures drawing data', () => {
     expect((await viewer.get(`/api/datasets/${data.id}`)).status).toBe(200);
   });
 
-  it('when a figure names a data set of another project, then it is not drawn and the render notes say so', async () => {
+  it('when a figure names a data set of another project, then 422 names the field and nothing is stored', async () => {
     const other = (await owner.post('/api/projects', { name: 'Other data' })).body.id;
     const foreign = (await uploadCsv(owner, onesCsv, { name: 'Foreign data' }, other)).body;
-    const fig = (
-      await editor.post(`/api/projects/${dataProject}/figures`, {
-        title: 'Foreign',
-        spec: spec([{ id: foreign.id }]),
-      })
-    ).body;
-    const svg = await svgOf(fig.id);
-    expect(svg.text).not.toContain('Foreign data');
-    expect(svg.notes).toEqual([
-      `Data set ${foreign.id} is not in this project, so it is not drawn.`,
+    const before = Number((await server.db('figures').count('* as n').first())?.n);
+    const r = await editor.post(`/api/projects/${dataProject}/figures`, {
+      title: 'Foreign',
+      spec: spec([{ id: foreign.id }]),
+    });
+    expect(r.status).toBe(422);
+    expect(r.body.error.fields).toEqual({
+      'spec.kind.datasets.0.id': `data set ${foreign.id} is not in this project`,
+    });
+    expect(Number((await server.db('figures').count('* as n').first())?.n)).toBe(before);
+  });
+
+  it('when a project with data is carried by a bundle, then the new project gets the data, its figures draw the copies with the same SVG bytes, and a second import adds nothing', async () => {
+    const bytes = (await editor.getBytes(`/api/projects/${dataProject}/bundle`)).bytes;
+    const bundle = JSON.parse(bytes.toString('utf8'));
+    const held = (await editor.get(`/api/projects/${dataProject}/datasets`)).body.length;
+    expect(bundle.datasets).toHaveLength(held);
+    const first = await editor.upload('/api/projects/import', {
+      field: 'bundle',
+      name: 'b.json',
+      content: bytes,
+    });
+    expect(first.status).toBe(201);
+    // Data sets identical in name, units and points (uploaded twice above) become one.
+    const distinct = new Set(
+      bundle.datasets.map((d: Record<string, unknown>) =>
+        JSON.stringify([d.name, d.quantity, d.rUnit, d.valueUnit, d.r, d.values]),
+      ),
+    );
+    expect(distinct.size).toBeLessThan(held);
+    expect(first.body.datasets).toBe(distinct.size);
+    const target = first.body.projectId;
+
+    const source = (await editor.get(`/api/projects/${dataProject}/figures`)).body.find(
+      (f: { title: string }) => f.title === 'R of 1s with data',
+    );
+    const copy = (await editor.get(`/api/projects/${target}/figures`)).body.find(
+      (f: { title: string }) => f.title === 'R of 1s with data',
+    );
+    const copySpec = (await editor.get(`/api/figures/${copy.id}`)).body.spec;
+    const drawn = datasetSchema.parse(
+      (await editor.get(`/api/datasets/${copySpec.kind.datasets[0].id}`)).body,
+    );
+    expect(drawn.projectId).toBe(target);
+    const original = (await editor.get(`/api/figures/${source.id}`)).body.spec.kind.datasets[0].id;
+    const originalData = datasetSchema.parse((await editor.get(`/api/datasets/${original}`)).body);
+    expect([drawn.name, drawn.r, drawn.values]).toEqual([
+      originalData.name,
+      originalData.r,
+      originalData.values,
     ]);
+    const svgA = await editor.getBytes(`/api/figures/${source.id}/render?format=svg`);
+    const svgB = await editor.getBytes(`/api/figures/${copy.id}/render?format=svg`);
+    expect(svgB.bytes.equals(svgA.bytes)).toBe(true);
+
+    const before = await datasetRows();
+    const again = await editor.upload(`/api/projects/${target}/import`, {
+      field: 'bundle',
+      name: 'b.json',
+      content: bytes,
+    });
+    expect(again.status).toBe(200);
+    expect(again.body.datasets).toBe(0);
+    expect(await datasetRows()).toBe(before);
   });
 });
