@@ -54,3 +54,15 @@ describe('composer helpers', () => {
     expect(isThreeDimensional(spec.kind)).toBe(true);
   });
 });
+
+describe('the automatic box size', () => {
+  it('when the spec leaves the extent unset, then fixing it starts from the size the builders would choose', async () => {
+    const { automaticExtent } =
+      await import('../../../app/features/composer/utils/automatic-extent');
+    const { suggestedExtent } = await import('../../../shared/physics/sample-state-on-grid');
+    const { compileState } = await import('../../../shared/physics/orbital-state');
+    const { orbitalStateOf } = await import('../../../shared/figures/figure-system');
+    expect(automaticExtent(spec)).toBe(suggestedExtent(compileState(orbitalStateOf(spec))));
+    expect(automaticExtent(spec)).toBeGreaterThan(10);
+  });
+});

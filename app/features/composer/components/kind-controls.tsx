@@ -31,6 +31,7 @@ import {
   type RadialCurve,
 } from '../utils/spec-edits';
 import type { EditSpec } from '../utils/spec-history';
+import { automaticExtent } from '../utils/automatic-extent';
 import { ChoiceField } from './choice-field';
 import { ControlGroup } from './control-group';
 import { ListField } from './list-field';
@@ -92,6 +93,52 @@ function PlaneField({
   );
 }
 
+/** A length in bohr the figure may fix, or leave to be chosen from the orbital (unset). */
+function OptionalLength({
+  checkLabel,
+  label,
+  value,
+  start,
+  max,
+  autoNote,
+  readOnly,
+  onChange,
+}: {
+  checkLabel: string;
+  label: string;
+  value: number | undefined;
+  start: number;
+  max: number;
+  autoNote: string;
+  readOnly: boolean;
+  onChange: (v: number | undefined) => void;
+}) {
+  return (
+    <>
+      <CheckboxField
+        label={checkLabel}
+        checked={value !== undefined}
+        disabled={readOnly}
+        onChange={(e) => onChange(e.target.checked ? start : undefined)}
+      />
+      {value !== undefined ? (
+        <NumberField
+          label={label}
+          unit="bohr"
+          value={value}
+          min={0.1}
+          max={max}
+          step={1}
+          disabled={readOnly}
+          onChange={onChange}
+        />
+      ) : (
+        <p className="text-xs text-stone-600">{autoNote}</p>
+      )}
+    </>
+  );
+}
+
 /** The ✕ at the end of a list row (an empty cell keeps the grid when it cannot be removed). */
 function RemoveRow({
   show,
@@ -146,6 +193,16 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             disabled={readOnly}
             hint="Finer grids give smoother surfaces and take longer."
             onChange={(v) => edit(patchKind(spec, 'isosurface', { grid: v }), 'grid')}
+          />
+          <OptionalLength
+            checkLabel="Fixed box size"
+            label="Box half-width"
+            value={k.extent}
+            start={automaticExtent(spec)}
+            max={2000}
+            autoNote="The box is sized to hold the orbital."
+            readOnly={readOnly}
+            onChange={(extent) => edit(patchKind(spec, 'isosurface', { extent }), 'extent')}
           />
           <CheckboxField
             label="Translucent outer surface"
@@ -278,6 +335,16 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             disabled={readOnly}
             onChange={(resolution) => edit(patchKind(spec, 'slice', { resolution }), 'resolution')}
           />
+          <OptionalLength
+            checkLabel="Fixed plot size"
+            label="Half-width of the plane shown"
+            value={k.extent}
+            start={automaticExtent(spec)}
+            max={2000}
+            autoNote="The plane shown is sized to hold the orbital."
+            readOnly={readOnly}
+            onChange={(extent) => edit(patchKind(spec, 'slice', { extent }), 'extent')}
+          />
         </>
       );
     case 'radial':
@@ -328,30 +395,16 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             label="Add a curve"
             onClick={() => edit(addRadialCurve(spec), 'curves')}
           />
-          <CheckboxField
-            label="Fixed radius range"
-            checked={k.rMax !== undefined}
-            disabled={readOnly}
-            onChange={(e) => {
-              const { rMax: _drop, ...rest } = k;
-              void _drop;
-              edit({ ...spec, kind: e.target.checked ? { ...rest, rMax: 20 } : rest }, 'rMax');
-            }}
+          <OptionalLength
+            checkLabel="Fixed radius range"
+            label="Radius up to"
+            value={k.rMax}
+            start={20}
+            max={5000}
+            autoNote="The radius range follows the curves."
+            readOnly={readOnly}
+            onChange={(rMax) => edit(patchKind(spec, 'radial', { rMax }), 'rMax')}
           />
-          {k.rMax !== undefined ? (
-            <NumberField
-              label="Radius up to"
-              unit="bohr"
-              value={k.rMax}
-              min={0.1}
-              max={5000}
-              step={1}
-              disabled={readOnly}
-              onChange={(rMax) => edit(patchKind(spec, 'radial', { rMax }), 'rMax')}
-            />
-          ) : (
-            <p className="text-xs text-stone-600">The radius range follows the curves.</p>
-          )}
           <CheckboxField
             label="Mark radial nodes"
             checked={k.showNodes}
