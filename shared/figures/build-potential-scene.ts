@@ -9,7 +9,6 @@
  * Energies print with as many digits as their estimated error allows (at most six). Lengths in the
  * spec's unit; energies in hartree with bohr, eV with pm or Å. kind.rMax is in bohr.
  */
-import { HARTREE_EV } from '../physics/constants';
 import type { ResolvedFigureSpec } from '../spec/resolve-figure-spec';
 import { clipPolyline } from './clip-polyline';
 import { FigureSpecError } from './figure-error';
@@ -43,7 +42,8 @@ import type { RadialSolution } from '../solver/solve-radial';
 import { sceneForSpec } from './scene-for-spec';
 import {
   effectiveValue,
-  energyDigits,
+  energyUnitFor,
+  printedEnergy,
   solvePotential,
   solverNote,
   turningPoints,
@@ -111,10 +111,7 @@ export function buildPotentialScene(spec: ResolvedFigureSpec): FigureScene {
   const kind = spec.kind;
   const style = figureStyle(spec);
   const unit = lengthUnit(spec.system.lengthUnit);
-  const energyUnit =
-    unit.key === 'bohr'
-      ? { symbol: 'hartree', perHartree: 1 }
-      : { symbol: 'eV', perHartree: HARTREE_EV };
+  const energyUnit = energyUnitFor(unit);
   const e = energyUnit.perHartree;
   const mu = systemMassRatio(spec);
   const { potential, solutions } = solvePotential(
@@ -359,7 +356,7 @@ export function buildPotentialScene(spec: ResolvedFigureSpec): FigureScene {
       [xb, y],
     ]);
     const value = lv.energy * e;
-    const printed = `${formatSignificant(value, energyDigits(value, lv.error * e))} ${energyUnit.symbol}`;
+    const printed = printedEnergy(lv.energy, lv.error, energyUnit);
     const runs: TextRun[] = [...shellRuns(lv.n, lv.l), plain(`: ${printed}`)];
     const beside = [
       text(xb + 1, y + cap / 2, runs, size, 'start', lv.stroke.colour, 'level-label'),
@@ -418,7 +415,7 @@ export function buildPotentialScene(spec: ResolvedFigureSpec): FigureScene {
   const levelWords = allLevels
     .map(
       (lv) =>
-        `${runsText(shellRuns(lv.n, lv.l))} at ${formatSignificant(lv.energy * e, energyDigits(lv.energy * e, lv.error * e))} ${energyUnit.symbol}`,
+        `${runsText(shellRuns(lv.n, lv.l))} at ${printedEnergy(lv.energy, lv.error, energyUnit)}`,
     )
     .join(', ');
   return sceneForSpec(spec, nodes, {

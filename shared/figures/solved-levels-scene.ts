@@ -9,7 +9,6 @@
  * (shared/physics/energy-levels, Bethe & Salpeter §2). Energies in hartree with bohr, eV with pm or Å,
  * each printed with the digits its estimated error allows (at most six).
  */
-import { HARTREE_EV } from '../physics/constants';
 import { energyValue } from '../physics/energy-levels';
 import { angularMomentumLetter } from '../physics/orbital-labels';
 import type { SolvedLevel } from '../solver/solve-radial';
@@ -20,7 +19,6 @@ import { figureStyle } from './figure-style';
 import { systemMassRatio } from './figure-system';
 import { legend } from './legend';
 import { lengthUnit } from './length-units';
-import { formatSignificant } from './number-format';
 import { axisNodes, makeAxis, linearScale, text, yAxisWidthMm, type Frame } from './plot-axes';
 import {
   lineNode,
@@ -32,7 +30,7 @@ import {
   type TextRun,
 } from './scene';
 import { sceneForSpec } from './scene-for-spec';
-import { energyDigits, solvePotential, solverNote } from './solved-potential';
+import { energyUnitFor, printedEnergy, solvePotential, solverNote } from './solved-potential';
 import { capHeightMm, layoutRuns } from './text-layout';
 
 const MARGIN_MM = 1.5;
@@ -58,10 +56,7 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
   const ls = Array.from({ length: lMax + 1 }, (_, l) => l);
   const style = figureStyle(spec);
   const unit = lengthUnit(spec.system.lengthUnit);
-  const energyUnit =
-    unit.key === 'bohr'
-      ? { symbol: 'hartree', perHartree: 1 }
-      : { symbol: 'eV', perHartree: HARTREE_EV };
+  const energyUnit = energyUnitFor(unit);
   const e = energyUnit.perHartree;
   const mu = systemMassRatio(spec);
   const { potential, solutions } = solvePotential(
@@ -87,7 +82,7 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
     );
 
   const printedOf = (hartree: number, error: number): string =>
-    `${formatSignificant(hartree * e, energyDigits(hartree * e, error * e))} ${energyUnit.symbol}`;
+    printedEnergy(hartree, error, energyUnit);
   const all = [...solved.map((lv) => lv.energy), ...hydrogen.map((h) => h.energy)];
   const threshold = Number.isFinite(potential.asymptotes.threshold)
     ? potential.asymptotes.threshold
@@ -152,12 +147,15 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
   const barStart = (col: number): number => frame.x0 + col * columnWidth + 0.06 * columnWidth;
   const barEnd = (col: number): number => barStart(col) + BAR_SHARE * columnWidth;
   const hydrogenStroke = { colour: style.muted, widthPt: style.lineWidthPt, dashPt: [2.5, 1.5] };
+  // Label baselines for levels at page heights ys, pushed apart where they crowd.
+  const spreadAt = (ys: number[]): number[] =>
+    spreadLabels(
+      ys.map((y) => y + cap / 2),
+      ptToMm(labelSize) * 1.15,
+      frame.y0,
+    );
   const hydrogenY = hydrogen.map((h) => Y(h.energy));
-  const spreadH = spreadLabels(
-    hydrogenY.map((y) => y + cap / 2),
-    ptToMm(labelSize) * 1.15,
-    frame.y0,
-  );
+  const spreadH = spreadAt(hydrogenY);
   hydrogen.forEach((h, i) => {
     for (const col of ls.keys())
       nodes.push(
@@ -245,11 +243,7 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
       });
     const levels = everyLevel.filter((lv) => lv.energy >= floor);
     const ys = levels.map((lv) => Y(lv.energy));
-    const spread = spreadLabels(
-      ys.map((y) => y + cap / 2),
-      ptToMm(labelSize) * 1.15,
-      frame.y0,
-    );
+    const spread = spreadAt(ys);
     levels.forEach((lv, i) => {
       nodes.push(
         lineNode(

@@ -19,7 +19,9 @@ import {
 } from '../solver/solve-radial';
 import type { PotentialSpec } from '../spec/figure-spec';
 import { FigureSpecError } from './figure-error';
-import { superscriptInteger } from './number-format';
+import { HARTREE_EV } from '../physics/constants';
+import type { LengthUnit } from './length-units';
+import { formatSignificant, superscriptInteger } from './number-format';
 
 /** Most significant digits an energy is printed with, however small its estimated error. */
 export const MAX_ENERGY_DIGITS = 6;
@@ -156,4 +158,22 @@ export function solverNote(levels: readonly SolvedLevel[], potential: Potential)
     `Solved numerically (Numerov shooting on a logarithmic grid, Richardson-extrapolated from two step sizes) for ${potential.label}, ${potential.formula}; ` +
     `estimated error of each level below ${bound.printed} hartree.`
   );
+}
+
+export interface EnergyUnit {
+  symbol: string;
+  perHartree: number;
+}
+
+/** Hartree beside lengths in bohr, eV beside pm or Å (the radial plot's rule). */
+export function energyUnitFor(unit: LengthUnit): EnergyUnit {
+  return unit.key === 'bohr'
+    ? { symbol: 'hartree', perHartree: 1 }
+    : { symbol: 'eV', perHartree: HARTREE_EV };
+}
+
+/** "−0.407058 hartree": an energy with the digits its estimated error (hartree) allows. */
+export function printedEnergy(hartree: number, error: number, unit: EnergyUnit): string {
+  const v = hartree * unit.perHartree;
+  return `${formatSignificant(v, energyDigits(v, error * unit.perHartree))} ${unit.symbol}`;
 }
