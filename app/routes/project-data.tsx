@@ -4,6 +4,7 @@ import { Panel } from '../components/ui/panel';
 import { DatasetList } from '../features/datasets/components/dataset-list';
 import { DatasetUploadForm } from '../features/datasets/components/dataset-upload-form';
 import { roleAllows } from '../../shared/api/roles';
+import { FigureDataLinks } from './figure-data-links';
 import { useProjectFromLayout } from './project-layout';
 
 export function ProjectDataRoute() {
@@ -21,6 +22,9 @@ export function ProjectDataRoute() {
         </p>
         <DatasetList projectId={project.id} canEdit={canEdit} />
       </section>
+      <Panel id="figure-data-title" title="Figures drawing data">
+        <FigureDataLinks projectId={project.id} canEdit={canEdit} />
+      </Panel>
       {canEdit && (
         <Panel id="upload-dataset-title" title="Upload data">
           <DatasetUploadForm projectId={project.id} />

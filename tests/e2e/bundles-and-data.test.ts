@@ -66,6 +66,22 @@ describe('radial data uploads and bundles in the browser', () => {
     const row = page.getByRole('row', { name: /hf-1s/ });
     await row.waitFor();
     expect(await row.getByRole('cell').nth(2).textContent()).toBe('bohr, bohr^-3/2');
+
+    const links = page.getByRole('region', { name: 'Figures drawing data' });
+    await links.getByText('No figure draws uploaded data yet.').waitFor();
+    await links.getByLabel('Data set').selectOption({ label: 'hf-1s' });
+    await links
+      .getByLabel('Radial figure')
+      .selectOption({ label: 'Figure 4.2: Radial distributions of 1s, 2s and 3s' });
+    await links.getByLabel('Legend label (optional)').fill('HF 1s');
+    await links.getByRole('button', { name: 'Draw in figure' }).click();
+    await links
+      .getByText(/^Figure 4\.2: Radial distributions of 1s, 2s and 3s: saved as revision \d+\.$/)
+      .waitFor();
+    await links.getByText('(shown as “HF 1s”)').waitFor();
+    const figureHref = await links.getByRole('link', { name: /Figure 4\.2/ }).getAttribute('href');
+    const svg = await page.request.get(`${stack.baseUrl}/api${figureHref}/render?format=svg`);
+    expect(await svg.text()).toContain('>HF 1s</tspan>');
     await saveScreenshot(page, 'data-uploaded');
   });
 
@@ -82,13 +98,11 @@ describe('radial data uploads and bundles in the browser', () => {
     await page.getByRole('link', { name: 'Projects', exact: true }).first().click();
     await page.getByRole('button', { name: 'Import bundle' }).click();
     const dialog = page.getByRole('dialog', { name: 'New project from a bundle' });
-    await dialog
-      .getByLabel(/Bundle file/)
-      .setInputFiles({
-        name: 'chapter-4.lobewright.json',
-        mimeType: 'application/json',
-        buffer: bytes,
-      });
+    await dialog.getByLabel(/Bundle file/).setInputFiles({
+      name: 'chapter-4.lobewright.json',
+      mimeType: 'application/json',
+      buffer: bytes,
+    });
     await dialog.getByRole('button', { name: 'Import' }).click();
     await dialog.getByText(/^Imported \d+ figures and 1 data set\.$/).waitFor();
     await saveScreenshot(page, 'bundle-imported');
@@ -96,15 +110,13 @@ describe('radial data uploads and bundles in the browser', () => {
     await page.getByRole('table', { name: /Figures in this project/ }).waitFor();
 
     await page.getByText('Import figures from a bundle').click();
-    await page
-      .getByLabel(/Bundle file/)
-      .setInputFiles({
-        name: 'again.lobewright.json',
-        mimeType: 'application/json',
-        buffer: bytes,
-      });
+    await page.getByLabel(/Bundle file/).setInputFiles({
+      name: 'again.lobewright.json',
+      mimeType: 'application/json',
+      buffer: bytes,
+    });
     await page.getByRole('button', { name: 'Import', exact: true }).click();
-    await page.getByText(/^Imported 0 figures and 1 data set\.$/).waitFor();
+    await page.getByText(/^Imported 0 figures\.$/).waitFor();
     await page.getByText('Skipped:').waitFor();
 
     await page.getByRole('link', { name: 'The 1s orbital', exact: true }).click();
