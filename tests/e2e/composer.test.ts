@@ -291,6 +291,8 @@ describe('the figure composer', () => {
     expect(await viewer.getByRole('button', { name: /^(Undo|Redo|Save figure)/ }).count()).toBe(0);
     await viewer.getByRole('button', { name: 'Download' }).waitFor();
     await saveScreenshot(viewer, 'composer-viewer');
+    await viewer.setViewportSize({ width: 760, height: 1000 });
+    await saveScreenshot(viewer, 'composer-viewer-narrow');
     expect(viewerProblems).toEqual([]);
   });
 });
