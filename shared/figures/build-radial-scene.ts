@@ -383,9 +383,10 @@ function potentialAxis(panel: Panel, ctx: Context): AxisDef {
   }
   const e = ctx.energyUnit.perHartree;
   if (panel.curves.length === 0) {
-    // Only uploaded potentials: the axis spans their values (in the printed energy unit).
+    // Only uploaded potentials: the axis spans their values (in the printed energy unit), and is
+    // called V, as nothing says the data include the centrifugal term.
     const { lo: dLo, hi: dHi } = seriesRange(panel.data, Infinity, (s, v) => printedData(s, v, ctx));
-    return makeAxis(Math.min(0, dLo), Math.max(0, dHi) + 0.05 * (dHi - dLo), quantityTitle('veff'), quantityUnit('veff', ctx));
+    return makeAxis(Math.min(0, dLo), Math.max(0, dHi) + 0.05 * (dHi - dLo), [italic('V')], quantityUnit('veff', ctx));
   }
   return makeAxis(lo * e, 0.4 * Math.abs(lo) * e, quantityTitle('veff'), quantityUnit('veff', ctx));
 }

@@ -58,6 +58,10 @@ describe('radial plot with data sets', () => {
     const scene = buildFigureScene(spec([{ id: 7 }, { id: 9 }]), data);
     const panels = scene.children.filter((n) => n.type === 'group').map((n) => n.role);
     expect(panels).toEqual(['panel-R', 'panel-veff']);
+    // Uploaded potentials alone: the axis is called V (the data need not include l(l+1)/2r²).
+    const veff = scene.children.find((n) => n.type === 'group' && n.role === 'panel-veff');
+    const titles = textsWithRole(veff && veff.type === 'group' ? veff.children : [], 'y-title');
+    expect(titles.map((t) => runsText(t.runs))).toEqual(['V / hartree']);
   });
 
   it('when a named data set is not given, then nothing is drawn for it and a note says so', () => {
