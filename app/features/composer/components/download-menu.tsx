@@ -79,6 +79,17 @@ export function DownloadMenu({
     if (open) itemRefs.current[0]?.focus();
   }, [open]);
 
+  // A click anywhere else closes the menu, as menus do.
+  const wrapperRef = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (!open) return;
+    const onDown = (event: MouseEvent) => {
+      if (!wrapperRef.current?.contains(event.target as Node)) setOpen(false);
+    };
+    document.addEventListener('mousedown', onDown);
+    return () => document.removeEventListener('mousedown', onDown);
+  }, [open]);
+
   async function download(item: Item) {
     setOpen(false);
     buttonRef.current?.focus();
@@ -123,7 +134,7 @@ export function DownloadMenu({
 
   return (
     <>
-      <div className="relative">
+      <div className="relative" ref={wrapperRef}>
         <button
           ref={buttonRef}
           type="button"
