@@ -7,6 +7,7 @@ import { AccountRoute } from './routes/account';
 import { AdminRoute } from './routes/admin';
 import { AppLayout } from './routes/app-layout';
 import { ConfirmEmailRoute } from './routes/confirm-email';
+import { CopyFigureRoute } from './routes/copy-figure';
 import { ForgotPasswordRoute } from './routes/forgot-password';
 import { NotFoundRoute } from './routes/not-found';
 import { ProjectAuditRoute } from './routes/project-audit';
@@ -58,6 +59,7 @@ const router = createBrowserRouter([
             // Its own chunk: the figure page will carry the 3D composer (three.js) with it.
             lazy: () => import('./routes/figure').then((m) => ({ Component: m.FigureRoute })),
           },
+          { path: '/figures/:figureId/copy', element: <CopyFigureRoute /> },
           { path: '/admin', element: <AdminRoute /> },
           { path: '/account', element: <AccountRoute /> },
           { path: '/confirm-email', element: <ConfirmEmailRoute /> },

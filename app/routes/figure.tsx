@@ -119,6 +119,11 @@ function FigurePage({ figure, project }: { figure: Figure; project: Project }) {
           )}
           <RoleBadge role={project.role} />
           <BundleDownloadLink href={figureBundleUrl(figure.id)} />
+          {canEdit && (
+            <Link to={`/figures/${figure.id}/copy`} className="underline underline-offset-2">
+              Copy to another project
+            </Link>
+          )}
         </div>
       </PageHeader>
 

@@ -124,6 +124,12 @@ describe('radial data uploads and bundles in the browser', () => {
     expect(await page.getByRole('link', { name: 'Download bundle' }).getAttribute('href')).toMatch(
       /^\/api\/figures\/\d+\/bundle$/,
     );
+
+    await page.getByRole('link', { name: 'Copy to another project' }).click();
+    await page.getByLabel('Into project').selectOption({ label: PROJECT });
+    await page.getByRole('button', { name: 'Copy figure' }).click();
+    await page.getByRole('heading', { level: 1, name: /Figure 4\.1-2\s*The 1s orbital/ }).waitFor();
+    await saveScreenshot(page, 'figure-copied');
     expect(problems).toEqual([]);
   });
 });
