@@ -30,14 +30,25 @@ import {
   type TextRun,
 } from './scene';
 import { sceneForSpec } from './scene-for-spec';
-import { energyUnitFor, printedEnergy, solvePotential, solverNote } from './solved-potential';
+import {
+  energyUnitFor,
+  MAX_ENERGY_DIGITS,
+  printedEnergy,
+  solvePotential,
+  solverNote,
+} from './solved-potential';
 import { capHeightMm, layoutRuns } from './text-layout';
 
 const MARGIN_MM = 1.5;
 /** lMax when the spec leaves it unset. */
 export const DEFAULT_COMPARE_L_MAX = 2;
 /** Share of a column the solved bars take; their labels use the rest. */
-const BAR_SHARE = 0.3;
+const BAR_SHARE = 0.25;
+/** Page width per column below which energies print with NARROW_DIGITS significant digits. */
+const WIDE_COLUMN_PAGE_MM = 38;
+const NARROW_DIGITS = 4;
+/** Narrowest column of solved levels. */
+const MIN_COLUMN_MM = 14;
 /** Levels deeper than this many times the next scale (hydrogen's 1s, or the valence levels) sit below a cut. */
 const CORE_DEPTH = 2.5;
 
@@ -81,8 +92,10 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
       'binds no level with l ≤ lMax and has no hydrogen-like charge to compare with',
     );
 
+  // Narrow columns (the default 84 mm square holds three) print four digits, so labels fit.
+  const narrow = spec.print.widthMm / ls.length < WIDE_COLUMN_PAGE_MM;
   const printedOf = (hartree: number, error: number): string =>
-    printedEnergy(hartree, error, energyUnit);
+    printedEnergy(hartree, error, energyUnit, narrow ? NARROW_DIGITS : MAX_ENERGY_DIGITS);
   const all = [...solved.map((lv) => lv.energy), ...hydrogen.map((h) => h.energy)];
   const threshold = Number.isFinite(potential.asymptotes.threshold)
     ? potential.asymptotes.threshold
@@ -112,7 +125,8 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
   const cap = capHeightMm(labelSize);
   const hydrogenRuns = hydrogen.map((h): TextRun[] => [
     italic('n'),
-    plain(` = ${h.n}: ${printedOf(h.energy, 0)}`),
+    // The unit is on the axis; the label keeps the number.
+    plain(` = ${h.n}: ${printedOf(h.energy, 0).split(' ')[0]}`),
   ]);
   const hydrogenWidth = Math.max(
     0,
@@ -124,7 +138,7 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
     x1: widthMm - MARGIN_MM - hydrogenWidth - 5,
     y1: heightMm - MARGIN_MM - 2 * ptToMm(style.fontSizePt) - 2,
   };
-  if (frame.x1 - frame.x0 < 20 * ls.length || frame.y1 - frame.y0 < 25)
+  if (frame.x1 - frame.x0 < MIN_COLUMN_MM * ls.length || frame.y1 - frame.y0 < 25)
     throw new FigureSpecError(
       'print',
       `${widthMm} × ${heightMm} mm is too small for ${ls.length} columns of levels`,
@@ -234,7 +248,7 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
             xa,
             y,
             [plain(`↓ ${name} ${printed.split(' ')[0]}`)],
-            labelSize * 0.92,
+            labelSize * 0.85,
             'start',
             colour,
             'solved-label',
@@ -278,17 +292,14 @@ export function buildSolvedLevelsScene(spec: ResolvedFigureSpec): FigureScene {
           xb + 1.2,
           spread[i],
           [plain(`${name} ${printed.split(' ')[0]}`)],
-          labelSize * 0.92,
+          labelSize * 0.85,
           'start',
           colour,
           'solved-label',
         ),
       );
     });
-    const heading: TextRun[] = [
-      italic('l'),
-      plain(` = ${l} (${angularMomentumLetter(l)}), solved`),
-    ];
+    const heading: TextRun[] = [italic('l'), plain(` = ${l} (${angularMomentumLetter(l)})`)];
     nodes.push(
       text(
         frame.x0 + (col + 0.5) * columnWidth,

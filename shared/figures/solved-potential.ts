@@ -173,7 +173,12 @@ export function energyUnitFor(unit: LengthUnit): EnergyUnit {
 }
 
 /** "−0.407058 hartree": an energy with the digits its estimated error (hartree) allows. */
-export function printedEnergy(hartree: number, error: number, unit: EnergyUnit): string {
+export function printedEnergy(
+  hartree: number,
+  error: number,
+  unit: EnergyUnit,
+  maxDigits = MAX_ENERGY_DIGITS,
+): string {
   const v = hartree * unit.perHartree;
-  return `${formatSignificant(v, energyDigits(v, error * unit.perHartree))} ${unit.symbol}`;
+  return `${formatSignificant(v, Math.min(maxDigits, energyDigits(v, error * unit.perHartree)))} ${unit.symbol}`;
 }

@@ -68,6 +68,24 @@ describe('solved levels beside hydrogen', () => {
     }
   });
 
+  it('when the page is the house style’s 84 mm square, then three columns fit and energies print with four digits', () => {
+    const scene = buildFigureScene(
+      resolved({
+        schemaVersion: 1,
+        state: { terms: [{ n: 1, l: 0, m: 0 }] },
+        kind: {
+          type: 'levels',
+          nMax: 4,
+          compare: 'solved-vs-hydrogen',
+          potential: { type: 'core-screened', Z: 3, a: 0.5 },
+        },
+      }),
+    );
+    expect(scene.widthMm).toBe(84);
+    expect(fact(scene, '2s (solved) energy').printed).toBe('−0.2010 hartree');
+    expect(fact(scene, 'n = 2 (hydrogen) energy').printed).toBe('−0.1250 hartree');
+  });
+
   it('when no potential is given, then the spec is refused naming kind.potential', () => {
     const spec = resolved({
       schemaVersion: 1,
