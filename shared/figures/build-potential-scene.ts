@@ -163,8 +163,9 @@ export function buildPotentialScene(spec: ResolvedFigureSpec): FigureScene {
     kind.rMax !== undefined,
   );
   const xEndBohr = (xAxis.ticks.max * Math.pow(10, xAxis.exponent)) / unit.perBohr;
+  // V is drawn only where it is defined: inside a table's range, inside a hard wall.
   const rs = sampleRadii(Math.min(xEndBohr, potential.outerLimit ?? Infinity)).filter(
-    (r) => wall === undefined || r <= wall,
+    (r) => (wall === undefined || r <= wall) && r >= (potential.innerLimit ?? 0),
   );
   const threshold = potential.asymptotes.threshold;
   // With no bound level at all, the energy axis spans the well down to its bottom.
