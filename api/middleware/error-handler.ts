@@ -3,6 +3,8 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { AppError } from '../lib/app-error';
 import { fieldsFromZod } from '../lib/zod-fields';
+import { FigureSpecError } from '../../shared/figures/figure-error';
+import { OrbitalInputError } from '../../shared/physics/orbital-input-error';
 
 export const notFoundHandler: RequestHandler = (req, res) => {
   res.status(404).json({ error: { code: 'not_found', message: `no route for ${req.method} ${req.path}` } });
@@ -18,6 +20,13 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
         ...(err.details ? { details: err.details } : {}),
       },
     });
+    return;
+  }
+  // A spec that validates but cannot be drawn (a level the potential does not bind, a grid too
+  // coarse for the state, …): the builders and the physics name the field at fault.
+  if (err instanceof FigureSpecError || err instanceof OrbitalInputError) {
+    const reason = err instanceof OrbitalInputError ? err.reason : err.message.replace(`${err.field}: `, '');
+    res.status(422).json({ error: { code: 'cannot_draw', message: err.message, fields: { [err.field]: reason } } });
     return;
   }
   if (err instanceof ZodError) {

@@ -112,6 +112,23 @@ describe('limits and access', () => {
     expect(await server.db('render_cache').count('* as n').first()).toEqual(before);
   });
 
+  it('when a valid spec cannot be drawn (a level the potential does not bind), then 422 names the field', async () => {
+    const spec = {
+      schemaVersion: 1,
+      state: { terms: [{ n: 3, l: 2, m: 0 }] },
+      kind: {
+        type: 'radial',
+        curves: [{ n: 3, l: 2, quantity: 'R', source: 'solved' }],
+        potential: { type: 'yukawa', Z: 1, lambda: 0.5 },
+      },
+    };
+    const f = (await editor.post(`/api/projects/${chapter4}/figures`, { title: 'Unbound', spec })).body;
+    const r = await editor.get(`/api/figures/${f.id}/render?format=svg`);
+    expect(r.status).toBe(422);
+    expect(r.body.error.code).toBe('cannot_draw');
+    expect(r.body.error.fields['kind.curves[0].l']).toMatch(/binds no level with l = 2/);
+  });
+
   it('when someone outside the project asks, then 404; an old revision can be rendered by number', async () => {
     expect((await admin.get(`/api/figures/${radialId}/render?format=svg`)).status).toBe(404);
     expect((await binary(viewer, `/api/figures/${radialId}/render?format=svg&revision=1`)).status).toBe(200);

@@ -11,6 +11,8 @@ import { houseStyleInputSchema, parseHouseStyle } from '../../../shared/spec/hou
 import { migrateFigureSpec, SpecVersionError } from '../../../shared/spec/migrate-figure-spec';
 import { resolveFigureSpec } from '../../../shared/spec/resolve-figure-spec';
 import { CliError, type CliCommand } from '../cli-error';
+import { FigureSpecError } from '../../../shared/figures/figure-error';
+import { OrbitalInputError } from '../../../shared/physics/orbital-input-error';
 
 const requestSchema = z.object({
   spec: z.unknown(),
@@ -53,6 +55,9 @@ const render: CliCommand = async (raw) => {
       facts: file.facts,
     };
   } catch (err) {
+    if (err instanceof FigureSpecError || err instanceof OrbitalInputError) {
+      throw new CliError(`spec.${err.field}`, err.message, 'cannot_draw');
+    }
     if (err instanceof AppError) {
       const field = Object.keys(err.fields ?? {})[0] ?? 'spec';
       throw new CliError(field.startsWith('print') || field.startsWith('kind') ? `spec.${field}` : field, err.message, err.code);
