@@ -2,14 +2,15 @@
 // the e-mail carries a single-use link that expires.
 import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/form-field';
+import { TextField } from '../../../components/ui/form-field';
+import { RoleSelectField } from '../../../components/ui/role-select-field';
 import { roleName } from '../../../components/ui/role-badge';
 import { FormAlert, SavedNote } from '../../../components/ui/status';
 import { useValidatedSubmit } from '../../../hooks/use-validated-submit';
 import { isApiError } from '../../../lib/api-client';
 import { formErrorMessage } from '../../../lib/form-errors';
 import { formatDateTime } from '../../../utils/format-date';
-import { projectRoles, roleDescriptions, type ProjectRole } from '../../../../shared/api/roles';
+import type { ProjectRole } from '../../../../shared/api/roles';
 import { createInvitationBody } from '../../../../shared/api/schemas';
 import { useCreateInvitation } from '../api/create-invitation';
 
@@ -43,21 +44,7 @@ export function InviteForm({ projectId }: { projectId: number }) {
           hint="They get a single-use link by e-mail. No Lobewright account is needed beforehand."
           className="min-w-64 flex-1"
         />
-        <SelectField
-          label="Role"
-          name="role"
-          value={role}
-          onChange={(e) => setRole(e.target.value as ProjectRole)}
-          error={errors.role}
-          hint={roleDescriptions[role]}
-          className="w-64"
-        >
-          {projectRoles.map((r) => (
-            <option key={r} value={r}>
-              {roleName(r)}
-            </option>
-          ))}
-        </SelectField>
+        <RoleSelectField value={role} onChange={setRole} error={errors.role} />
         <Button type="submit" variant="primary" busy={invite.isPending} className="mt-6">
           {invite.isPending ? 'Sending…' : 'Send invitation'}
         </Button>

@@ -1,12 +1,13 @@
 // Adds someone to the project by the e-mail address of their Lobewright account (owners only).
 import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/form-field';
+import { TextField } from '../../../components/ui/form-field';
+import { RoleSelectField } from '../../../components/ui/role-select-field';
 import { FormAlert, SavedNote } from '../../../components/ui/status';
 import { useValidatedSubmit } from '../../../hooks/use-validated-submit';
 import { formErrorMessage } from '../../../lib/form-errors';
 import { roleName } from '../../../components/ui/role-badge';
-import { projectRoles, roleDescriptions, type ProjectRole } from '../../../../shared/api/roles';
+import type { ProjectRole } from '../../../../shared/api/roles';
 import { addMemberBody } from '../../../../shared/api/schemas';
 import { useAddMember } from '../api/add-member';
 
@@ -37,21 +38,7 @@ export function AddMemberForm({ projectId }: { projectId: number }) {
           hint="They need a Lobewright account already."
           className="min-w-64 flex-1"
         />
-        <SelectField
-          label="Role"
-          name="role"
-          value={role}
-          onChange={(e) => setRole(e.target.value as ProjectRole)}
-          error={errors.role}
-          hint={roleDescriptions[role]}
-          className="w-64"
-        >
-          {projectRoles.map((r) => (
-            <option key={r} value={r}>
-              {roleName(r)}
-            </option>
-          ))}
-        </SelectField>
+        <RoleSelectField value={role} onChange={setRole} error={errors.role} />
         <Button type="submit" variant="primary" busy={addMember.isPending} className="mt-6">
           {addMember.isPending ? 'Adding…' : 'Add member'}
         </Button>
