@@ -93,6 +93,14 @@ describe('two editors saving the same figure', () => {
     await revisions
       .getByText('Differs from the latest revision (3) in: caption, alt text.')
       .waitFor();
+    // Side by side: both revisions as they print, and the two changed settings marked.
+    const sideBySide = revisions.getByRole('region', { name: 'Revision 1 beside revision 3' });
+    await sideBySide.getByText('2 settings differ; marked below.').waitFor();
+    await sideBySide.getByRole('rowheader', { name: /^caption changed$/ }).waitFor();
+    await sideBySide.getByRole('rowheader', { name: /^altText changed$/ }).waitFor();
+    expect(await sideBySide.getByRole('rowheader', { name: /^title$/ }).count()).toBe(1);
+    await sideBySide.getByRole('img', { name: 'Revision 1 as it prints' }).waitFor();
+    await saveScreenshot(ravi, 'revision-side-by-side');
     await revisions.getByRole('button', { name: 'Restore revision 1' }).click();
     await revisions.getByText('Revision 1 restored as revision 4.').waitFor();
     expect(await ravi.getByLabel('Caption').inputValue()).toBe(

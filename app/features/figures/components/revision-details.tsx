@@ -8,6 +8,7 @@ import { useRevision } from '../api/get-revision';
 import { useUpdateFigure } from '../api/update-figure';
 import { revisionDifferences } from '../utils/compare-revisions';
 import { FigureDetailsView } from './figure-details-view';
+import { RevisionSideBySide } from './revision-side-by-side';
 import { SpecSummary } from './spec-summary';
 
 interface RevisionDetailsProps {
@@ -75,6 +76,7 @@ export function RevisionDetails({
             : `Same as the latest revision (${figure.revision}).`}
         </p>
       )}
+      {!latest && <RevisionSideBySide figure={figure} older={saved} />}
       <FigureDetailsView figure={saved} />
       <SpecSummary spec={saved.spec} />
       <p className="text-xs text-stone-600">
