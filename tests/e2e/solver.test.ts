@@ -81,4 +81,30 @@ describe('the potential picker in the composer', () => {
     await lambda.blur();
     expect(problems).toEqual([]);
   });
+
+  it('when a radial plot also solves for a potential, then a solved curve is drawn beside hydrogen’s', async () => {
+    await page.getByLabel('Kind of figure').selectOption('radial');
+    await page.getByLabel('Also solve for another potential').check();
+    expect(await page.getByLabel('Potential', { exact: true }).inputValue()).toBe('yukawa');
+    // 3d binds only for λ < 0.0913 (REFERENCE.md §10.5): screen weakly so the solved 3d exists.
+    const lambda = page.getByLabel('Screening λ');
+    await lambda.fill('0.01');
+    await lambda.blur();
+    await page.getByLabel('Curve 1 from').selectOption('solved');
+    await expect
+      .poll(async () => (await preview().locator('svg').first().textContent()) ?? '', { timeout: 30_000 })
+      .toMatch(/\(solved\)/);
+    await saveScreenshot(page, 'solver-radial-solved-curve');
+  });
+
+  it('when a level diagram compares with a solved potential, then the solved levels are drawn beside hydrogen’s', async () => {
+    await page.getByLabel('Kind of figure').selectOption('levels');
+    await page.getByLabel('Compare with levels solved for another potential').check();
+    await page.getByLabel('Solved levels for l up to').waitFor();
+    await expect
+      .poll(async () => (await preview().locator('svg').first().textContent()) ?? '', { timeout: 30_000 })
+      .toMatch(/hydrogen/i);
+    await saveScreenshot(page, 'solver-levels-compare');
+    expect(problems).toEqual([]);
+  });
 });

@@ -5,6 +5,7 @@ import { CheckboxField } from '../../../components/ui/checkbox-field';
 import { angularMomentumLetter } from '../../../../shared/physics/orbital-labels';
 import { systemMassRatio } from '../../../../shared/figures/figure-system';
 import {
+  DEFAULT_POTENTIAL,
   figureKindNames,
   MAX_N,
   MAX_POTENTIAL_L,
@@ -395,6 +396,54 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             label="Add a curve"
             onClick={() => edit(addRadialCurve(spec), 'curves')}
           />
+          <CheckboxField
+            label="Also solve for another potential"
+            checked={k.potential !== undefined}
+            disabled={readOnly}
+            onChange={(e) =>
+              edit(
+                e.target.checked
+                  ? patchKind(spec, 'radial', { potential: DEFAULT_POTENTIAL })
+                  : patchKind(spec, 'radial', {
+                      potential: undefined,
+                      curves: k.curves.map((c) => ({ ...c, source: undefined })),
+                    }),
+                'potential',
+              )
+            }
+          />
+          {k.potential !== undefined && (
+            <>
+              <PotentialControls
+                value={k.potential}
+                ls={[...new Set(k.curves.map((c) => c.l))]}
+                levels={Math.max(...k.curves.map((c) => c.n - c.l))}
+                muRatio={systemMassRatio(spec)}
+                disabled={readOnly}
+                onChange={(potential) => edit(patchKind(spec, 'radial', { potential }), 'potential')}
+              />
+              <ol className="space-y-2" aria-label="Curve sources">
+                {k.curves.map((c, i) =>
+                  c.quantity === 'veff' ? null : (
+                    <li key={i}>
+                      <ChoiceField
+                        label={`Curve ${i + 1} from`}
+                        value={c.source ?? 'hydrogen'}
+                        disabled={readOnly}
+                        choices={[
+                          { value: 'hydrogen', label: 'Hydrogen (exact)' },
+                          { value: 'solved', label: 'The potential above (solved)' },
+                        ]}
+                        onChange={(source) =>
+                          edit(setRadialCurve(spec, i, { source }), `curves.${i}.source`)
+                        }
+                      />
+                    </li>
+                  ),
+                )}
+              </ol>
+            </>
+          )}
           <OptionalLength
             checkLabel="Fixed radius range"
             label="Radius up to"
@@ -532,6 +581,44 @@ function KindSettings({ spec, onEdit, readOnly }: Props) {
             label="Add a transition"
             onClick={() => edit(addTransition(spec), 'transitions')}
           />
+          <CheckboxField
+            label="Compare with levels solved for another potential"
+            checked={k.compare !== undefined}
+            disabled={readOnly}
+            onChange={(e) =>
+              edit(
+                e.target.checked
+                  ? patchKind(spec, 'levels', {
+                      compare: 'solved-vs-hydrogen',
+                      potential: k.potential ?? DEFAULT_POTENTIAL,
+                      lMax: k.lMax ?? 2,
+                    })
+                  : patchKind(spec, 'levels', { compare: undefined, potential: undefined, lMax: undefined }),
+                'compare',
+              )
+            }
+          />
+          {k.compare !== undefined && k.potential !== undefined && (
+            <>
+              <PotentialControls
+                value={k.potential}
+                ls={range(0, k.lMax ?? 2)}
+                levels={2}
+                muRatio={systemMassRatio(spec)}
+                disabled={readOnly}
+                onChange={(potential) => edit(patchKind(spec, 'levels', { potential }), 'potential')}
+              />
+              <NumberField
+                label="Solved levels for l up to"
+                value={k.lMax ?? 2}
+                min={0}
+                max={MAX_POTENTIAL_LS - 1}
+                integer
+                disabled={readOnly}
+                onChange={(lMax) => edit(patchKind(spec, 'levels', { lMax }), 'lMax')}
+              />
+            </>
+          )}
         </>
       );
     case 'potential':

@@ -124,8 +124,26 @@ function CsvField({
 }) {
   const id = useId();
   const [draft, setDraft] = useState<{ text: string; problem: string | null } | null>(null);
+  const take = (text: string) => {
+    const checked = check({ ...spec, csv: text });
+    if ('spec' in checked) onChange(checked.spec);
+    setDraft({ text, problem: 'problem' in checked ? checked.problem : null });
+  };
   return (
     <div className="space-y-1">
+      <label className="block text-sm font-semibold text-stone-800">
+        Upload a table (CSV file)
+        <input
+          type="file"
+          accept=".csv,text/csv,text/plain"
+          disabled={disabled}
+          className="mt-1 block text-xs font-normal"
+          onChange={(e) => {
+            const file = e.target.files?.[0];
+            if (file) void file.text().then(take);
+          }}
+        />
+      </label>
       <label htmlFor={id} className="block text-sm font-semibold text-stone-800">
         Table (CSV: header r_bohr|r_angstrom|r_pm, V_hartree|V_eV)
       </label>
@@ -137,14 +155,7 @@ function CsvField({
         spellCheck={false}
         aria-invalid={draft?.problem ? true : undefined}
         aria-describedby={draft?.problem ? `${id}-error` : undefined}
-        onChange={(e) => {
-          const checked = check({ ...spec, csv: e.target.value });
-          if ('spec' in checked) onChange(checked.spec);
-          setDraft({
-            text: e.target.value,
-            problem: 'problem' in checked ? checked.problem : null,
-          });
-        }}
+        onChange={(e) => take(e.target.value)}
         className="block w-full rounded-md border border-stone-300 bg-white px-2.5 py-1.5 font-mono text-xs text-stone-900"
       />
       {draft?.problem ? (
