@@ -73,6 +73,10 @@ function ViewControls({
 export function OrbitalViewport({ spec, onViewChange, className }: OrbitalViewportProps) {
   const geometryState = useOrbitalGeometry(spec);
   const { geometry, status, progress, stage, error } = geometryState;
+  // While a new figure is computed the last one stays on screen (under the progress bar), so the
+  // scene and its HTML labels are not torn down and rebuilt on every edit.
+  const [shown, setShown] = useState(geometry);
+  if (geometry && geometry !== shown) setShown(geometry);
   // The view shown: the spec's, until the reader turns the figure or picks a preset.
   const specViewKey = canonicalJson(spec.view);
   const [local, setLocal] = useState<{ key: string; view: ViewSettings } | null>(null);
@@ -119,16 +123,16 @@ export function OrbitalViewport({ spec, onViewChange, className }: OrbitalViewpo
           gl={{ antialias: true, alpha: true }}
           aria-label={`3D view of ${geometry?.facts.label ?? 'the orbital'}; drag to turn, scroll to zoom`}
         >
-          {geometry ? (
+          {shown ? (
             <>
               <OrbitalScene
-                geometry={geometry}
+                geometry={shown}
                 spec={sceneSpec}
                 domLabels
                 lineWidthPx={VIEWPORT_LINE_PX}
                 pointSizePx={VIEWPORT_POINT_PX}
               />
-              <ViewControls view={view} radius={geometry.radius} onEnd={changeView} />
+              <ViewControls view={view} radius={shown.radius} onEnd={changeView} />
             </>
           ) : null}
         </Canvas>
