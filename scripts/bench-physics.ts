@@ -5,6 +5,7 @@ import { sampleStateOnGrid, suggestedExtent } from '../shared/physics/sample-sta
 import { radialFunction } from '../shared/physics/radial-function';
 import { cumulativeRadialProbability } from '../shared/physics/radial-probability';
 import { sp3Hybrids } from '../shared/physics/hybrid-orbitals';
+import { medianTime } from './lib/median-time';
 
 function option(name: string, fallback: number): number {
   const i = process.argv.indexOf(`--${name}`);
@@ -14,18 +15,7 @@ function option(name: string, fallback: number): number {
 const grid = option('grid', 128);
 const repeat = option('repeat', 5);
 
-/** Median wall time in ms of `repeat` runs after one warm-up run. */
-function time(run: () => void): number {
-  run();
-  const ms: number[] = [];
-  for (let i = 0; i < repeat; i++) {
-    const t0 = performance.now();
-    run();
-    ms.push(performance.now() - t0);
-  }
-  ms.sort((a, b) => a - b);
-  return Math.round(ms[Math.floor(ms.length / 2)] * 100) / 100;
-}
+const time = (run: () => void): number => medianTime(run, repeat);
 
 const states: Record<string, OrbitalState> = {
   '1s': { Z: 1, terms: [{ n: 1, l: 0, m: 0, basis: 'real' }] },

@@ -4,21 +4,12 @@
 import { countBoundLevels } from '../shared/solver/count-bound-levels';
 import { buildPotential } from '../shared/solver/potentials/build-potential';
 import { DEFAULT_STEP, solveRadial } from '../shared/solver/solve-radial';
+import { medianTime } from './lib/median-time';
 
 const at = process.argv.indexOf('--repeat');
 const repeat = at > 0 ? Number(process.argv[at + 1]) : 9;
 
-function median(run: () => void): number {
-  run();
-  const ms: number[] = [];
-  for (let i = 0; i < repeat; i++) {
-    const t0 = performance.now();
-    run();
-    ms.push(performance.now() - t0);
-  }
-  ms.sort((a, b) => a - b);
-  return Math.round(ms[Math.floor(ms.length / 2)] * 100) / 100;
-}
+const median = (run: () => void): number => medianTime(run, repeat);
 
 function solveAll(spec: unknown, ls: number[], levels: number): () => void {
   return () => {

@@ -3,6 +3,7 @@
 // run succeeded — so a run either has its whole bundle or none. Progress is written per figure.
 import { createHash } from 'node:crypto';
 import archiver from 'archiver';
+import sharp from 'sharp';
 import type { Knex } from 'knex';
 import PDFDocument from 'pdfkit';
 import type { ExportRun } from '../../shared/api/schemas';
@@ -55,6 +56,19 @@ export interface Manifest {
 }
 
 const PROOF_DPI = 150;
+
+/**
+ * The proof sheet's picture of a figure: the run's own PNG scaled down when it made one (a 3D
+ * figure is not drawn in the browser a second time), otherwise a render at the proof resolution.
+ */
+async function proofImage(db: Knex, spec: ResolvedFigureSpec, printPng: Buffer | null, projectId: number): Promise<Buffer> {
+  if (printPng) {
+    const width = Math.max(1, Math.round((spec.print.widthMm / 25.4) * PROOF_DPI));
+    return sharp(printPng).flatten({ background: '#ffffff' }).resize({ width }).png().toBuffer();
+  }
+  const proofSpec = { ...spec, print: { ...spec.print, dpi: PROOF_DPI, background: 'white' as const } };
+  return (await renderResolvedSpec(db, proofSpec, 'png', false, projectId)).bytes;
+}
 
 function fileStem(number: string, id: number): string {
   return number ? `fig-${number.replace(/[^0-9A-Za-z.-]/g, '_')}` : `fig-id${id}`;
@@ -166,8 +180,10 @@ export async function processExportRun(db: Knex, env: Env, mailer: Mailer, runId
       const entryFiles: ManifestFile[] = [];
       let facts: Record<string, unknown> = {};
       let notes: string[] = [];
+      let printPng: Buffer | null = null;
       for (const format of run.request.formats) {
         const r = await renderResolvedSpec(db, spec, format, false, Number(run.project_id));
+        if (format === 'png') printPng = r.bytes;
         const name = `${stem}.${format === 'tiff' ? 'tif' : format}`;
         files.push({ name, data: r.bytes });
         entryFiles.push({ name, format, bytes: r.bytes.length, sha256: sha256(r.bytes) });
@@ -189,8 +205,7 @@ export async function processExportRun(db: Knex, env: Env, mailer: Mailer, runId
         notes,
       };
       entries.push(entry);
-      const proofSpec = { ...spec, print: { ...spec.print, dpi: PROOF_DPI, background: 'white' as const } };
-      proofs.push({ entry, spec, png: (await renderResolvedSpec(db, proofSpec, 'png', false, Number(run.project_id))).bytes });
+      proofs.push({ entry, spec, png: await proofImage(db, spec, printPng, Number(run.project_id)) });
     } catch (err) {
       errors.push({ figure: label, message: (err as Error).message });
     }
